@@ -1,0 +1,4 @@
+export * from './auth.js';
+export * from './errors.js';
+export * from './health.js';
+export * from './kitchens.js';

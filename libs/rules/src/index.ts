@@ -1,0 +1,2 @@
+export * from './jars.js';
+export * from './kitchen.js';
