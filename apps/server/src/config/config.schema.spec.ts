@@ -1,0 +1,32 @@
+import { describe, expect, it } from 'vitest';
+import { ConfigError, validateConfig } from './config.schema.js';
+
+describe('validateConfig', () => {
+  it('fills the defaults', () => {
+    const c = validateConfig({});
+    expect(c.PORT).toBe(3000);
+    expect(c.NODE_ENV).toBe('development');
+    expect(c.databasePath).toMatch(/data\/jarday\.sqlite$/);
+    expect(c.storageDir).toBe(`${c.dataDir}/uploads`);
+    expect(c.DEMO_MODE).toBe(false);
+  });
+
+  it.each([
+    [{ PORT: 'abc' }, 'PORT'],
+    [{ PORT: '70000' }, 'PORT'],
+    [{ DEMO_MODE: 'maybe' }, 'DEMO_MODE'],
+    [{ JWT_SECRET: 'short' }, 'JWT_SECRET'],
+    [{ NODE_ENV: 'production' }, 'JWT_SECRET'],
+    [{ SMTP_URL: 'not a url' }, 'SMTP_URL'],
+    [{ NODE_ENV: 'staging' }, 'NODE_ENV'],
+  ])('refuses %o, naming %s', (env, setting) => {
+    expect(() => validateConfig(env)).toThrow(ConfigError);
+    expect(() => validateConfig(env)).toThrow(new RegExp(`^  ${setting}:`, 'm'));
+  });
+
+  it('accepts a production setup with a secret', () => {
+    const c = validateConfig({ NODE_ENV: 'production', JWT_SECRET: 'x'.repeat(40), PORT: '8080', DEMO_MODE: 'true' });
+    expect(c.PORT).toBe(8080);
+    expect(c.DEMO_MODE).toBe(true);
+  });
+});

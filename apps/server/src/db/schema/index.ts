@@ -1,0 +1,2 @@
+export * from './kitchens.js';
+export * from './users.js';

@@ -1,0 +1,67 @@
+import type { AltitudeUnit, CanningMethod, GaugeType, JarSize, UnitSystem } from '@jarday/rules';
+import type { Role } from '@jarday/contracts';
+import { index, integer, primaryKey, real, sqliteTable, text } from 'drizzle-orm/sqlite-core';
+import { users } from './users.js';
+
+export const kitchens = sqliteTable('kitchens', {
+  id: text('id').primaryKey(),
+  name: text('name').notNull(),
+  /** Kept as entered, so a kitchen that works in metres sees metres again. */
+  altitudeValue: real('altitude_value').notNull(),
+  altitudeUnit: text('altitude_unit').$type<AltitudeUnit>().notNull(),
+  units: text('units').$type<UnitSystem>().notNull(),
+  createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull(),
+});
+
+export const memberships = sqliteTable(
+  'memberships',
+  {
+    kitchenId: text('kitchen_id')
+      .notNull()
+      .references(() => kitchens.id, { onDelete: 'cascade' }),
+    userId: text('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    role: text('role').$type<Role>().notNull(),
+    joinedAt: integer('joined_at', { mode: 'timestamp_ms' }).notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.kitchenId, t.userId] }), index('memberships_user_idx').on(t.userId)],
+);
+
+export const invites = sqliteTable(
+  'invites',
+  {
+    id: text('id').primaryKey(),
+    kitchenId: text('kitchen_id')
+      .notNull()
+      .references(() => kitchens.id, { onDelete: 'cascade' }),
+    /** 8 characters without the display dash. */
+    code: text('code').notNull().unique(),
+    role: text('role').$type<Exclude<Role, 'lead'>>().notNull(),
+    createdBy: text('created_by')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull(),
+    expiresAt: integer('expires_at', { mode: 'timestamp_ms' }).notNull(),
+    redeemedBy: text('redeemed_by').references(() => users.id, { onDelete: 'set null' }),
+    redeemedAt: integer('redeemed_at', { mode: 'timestamp_ms' }),
+    revokedAt: integer('revoked_at', { mode: 'timestamp_ms' }),
+  },
+  (t) => [index('invites_kitchen_idx').on(t.kitchenId)],
+);
+
+export const canners = sqliteTable(
+  'canners',
+  {
+    id: text('id').primaryKey(),
+    kitchenId: text('kitchen_id')
+      .notNull()
+      .references(() => kitchens.id, { onDelete: 'cascade' }),
+    name: text('name').notNull(),
+    method: text('method').$type<CanningMethod>().notNull(),
+    gauge: text('gauge').$type<GaugeType>(),
+    capacity: text('capacity', { mode: 'json' }).$type<Partial<Record<JarSize, number>>>().notNull(),
+    createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull(),
+  },
+  (t) => [index('canners_kitchen_idx').on(t.kitchenId)],
+);
