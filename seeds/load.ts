@@ -28,7 +28,9 @@ export async function loadSeed(db: Db, seed: Seed, now = new Date()): Promise<bo
   const kitchenId = randomUUID();
   db.transaction((tx) => {
     for (const p of people) {
-      tx.insert(users).values({ id: p.id, email: p.email, name: p.name, passwordHash: p.passwordHash, createdAt: now }).run();
+      tx.insert(users)
+        .values({ id: p.id, email: p.email, name: p.name, passwordHash: p.passwordHash, createdAt: now })
+        .run();
     }
     tx.insert(kitchens)
       .values({
@@ -40,8 +42,12 @@ export async function loadSeed(db: Db, seed: Seed, now = new Date()): Promise<bo
         createdAt: now,
       })
       .run();
-    for (const p of people) tx.insert(memberships).values({ kitchenId, userId: p.id, role: p.role, joinedAt: now }).run();
-    for (const c of seed.canners) tx.insert(canners).values({ id: randomUUID(), kitchenId, createdAt: now, ...c }).run();
+    for (const p of people)
+      tx.insert(memberships).values({ kitchenId, userId: p.id, role: p.role, joinedAt: now }).run();
+    for (const c of seed.canners)
+      tx.insert(canners)
+        .values({ id: randomUUID(), kitchenId, createdAt: now, ...c })
+        .run();
   });
   return true;
 }

@@ -21,7 +21,8 @@ export class AppModule {
     const config = validateConfig(env);
     const webDist = config.WEB_DIST_PATH ?? DEFAULT_WEB_DIST;
     const hasWeb = existsSync(`${webDist}/index.html`);
-    if (!hasWeb && config.NODE_ENV !== 'test') new Logger('Web').warn(`No built web app at ${webDist}: run "npm run build:web" to serve it at /`);
+    if (!hasWeb && config.NODE_ENV !== 'test')
+      new Logger('Web').warn(`No built web app at ${webDist}: run "npm run build:web" to serve it at /`);
     return {
       module: AppModule,
       imports: [

@@ -24,7 +24,10 @@ describe('sign-in (e2e, fresh SQLite file)', () => {
     expect(setCookie).toMatch(/Path=\/api\/auth/);
     const cookie = refreshCookie(res);
 
-    const me = await request(t.http).get('/api/auth/me').set('Authorization', `Bearer ${session.accessToken}`).expect(200);
+    const me = await request(t.http)
+      .get('/api/auth/me')
+      .set('Authorization', `Bearer ${session.accessToken}`)
+      .expect(200);
     expect(me.body).toMatchObject({ id: session.user.id, email: 'maren@example.test' });
 
     const refreshed = await request(t.http).post('/api/auth/refresh').set('Cookie', cookie).expect(200);
@@ -66,7 +69,10 @@ describe('sign-in (e2e, fresh SQLite file)', () => {
   });
 
   it('refuses a duplicate e-mail with 409, whatever its case', async () => {
-    await request(t.http).post('/api/auth/register').send({ email: 'dup@example.test', name: 'A', password: 'password one two' }).expect(201);
+    await request(t.http)
+      .post('/api/auth/register')
+      .send({ email: 'dup@example.test', name: 'A', password: 'password one two' })
+      .expect(201);
     const res = await request(t.http)
       .post('/api/auth/register')
       .send({ email: 'DUP@example.test', name: 'B', password: 'password one two' })

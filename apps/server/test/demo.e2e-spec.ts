@@ -27,13 +27,22 @@ describe('demo data (e2e)', () => {
 
   it('lists the demo accounts in demo mode, and each one signs in to the kitchen with its role', async () => {
     const res = await request(t.http).get('/api/auth/demo-accounts').expect(200);
-    const { demoMode, accounts } = res.body as { demoMode: boolean; accounts: { email: string; password: string; role: string }[] };
+    const { demoMode, accounts } = res.body as {
+      demoMode: boolean;
+      accounts: { email: string; password: string; role: string }[];
+    };
     expect(demoMode).toBe(true);
     expect(accounts).toHaveLength(3);
     for (const account of accounts) {
-      const session = (await request(t.http).post('/api/auth/sign-in').send({ email: account.email, password: account.password }).expect(200)).body as SessionView;
-      const kitchens = (await request(t.http).get('/api/kitchens').set('Authorization', `Bearer ${session.accessToken}`).expect(200))
-        .body as KitchenView[];
+      const session = (
+        await request(t.http)
+          .post('/api/auth/sign-in')
+          .send({ email: account.email, password: account.password })
+          .expect(200)
+      ).body as SessionView;
+      const kitchens = (
+        await request(t.http).get('/api/kitchens').set('Authorization', `Bearer ${session.accessToken}`).expect(200)
+      ).body as KitchenView[];
       expect(kitchens).toHaveLength(1);
       expect(kitchens[0]).toMatchObject({ name: seed.kitchen.name, role: account.role, memberCount: 3 });
     }

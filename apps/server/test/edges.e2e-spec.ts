@@ -10,13 +10,18 @@ describe('errors at the edge (e2e)', () => {
   afterAll(() => t.close());
 
   it('malformed JSON is a 400 that says so', async () => {
-    const res = await request(t.http).post('/api/auth/sign-in').set('Content-Type', 'application/json').send('{"email": "a@');
+    const res = await request(t.http)
+      .post('/api/auth/sign-in')
+      .set('Content-Type', 'application/json')
+      .send('{"email": "a@');
     expect(res.status).toBe(400);
     expect(res.body).toEqual({ statusCode: 400, code: 'bad_json', message: 'The request body is not valid JSON' });
   });
 
   it('validation names each bad field', async () => {
-    const res = await request(t.http).post('/api/auth/register').send({ email: 'not-an-email', name: '', password: 'short' });
+    const res = await request(t.http)
+      .post('/api/auth/register')
+      .send({ email: 'not-an-email', name: '', password: 'short' });
     expect(res.status).toBe(400);
     const body = res.body as { code: string; issues: { path: string; message: string }[] };
     expect(body.code).toBe('validation_failed');
@@ -33,7 +38,9 @@ describe('errors at the edge (e2e)', () => {
   });
 
   it('an oversized body is a 413', async () => {
-    const res = await request(t.http).post('/api/auth/sign-in').send({ email: 'a@example.test', password: 'x'.repeat(5000) });
+    const res = await request(t.http)
+      .post('/api/auth/sign-in')
+      .send({ email: 'a@example.test', password: 'x'.repeat(5000) });
     expect(res.status).toBe(413);
     expect(res.body).toMatchObject({ code: 'payload_too_large' });
   });

@@ -29,7 +29,13 @@ const LEAD_ONLY = (ok: number) => ({ lead: ok, helper: 403, watcher: 403, outsid
 /** Every kitchen route, with what each role may do (a non-member always gets 404). */
 const ROUTES: RouteCase[] = [
   { name: 'read kitchen', method: 'get', path: (k) => `/api/kitchens/${k}`, expect: MEMBER_READ },
-  { name: 'rename kitchen', method: 'patch', path: (k) => `/api/kitchens/${k}`, body: { name: 'Renamed' }, expect: LEAD_ONLY(200) },
+  {
+    name: 'rename kitchen',
+    method: 'patch',
+    path: (k) => `/api/kitchens/${k}`,
+    body: { name: 'Renamed' },
+    expect: LEAD_ONLY(200),
+  },
   { name: 'list members', method: 'get', path: (k) => `/api/kitchens/${k}/members`, expect: MEMBER_READ },
   {
     name: 'change a role',
@@ -38,12 +44,34 @@ const ROUTES: RouteCase[] = [
     body: { role: 'watcher' },
     expect: LEAD_ONLY(200),
   },
-  { name: 'remove a member', method: 'delete', path: (k, f) => `/api/kitchens/${k}/members/${f.memberId}`, expect: LEAD_ONLY(204) },
+  {
+    name: 'remove a member',
+    method: 'delete',
+    path: (k, f) => `/api/kitchens/${k}/members/${f.memberId}`,
+    expect: LEAD_ONLY(204),
+  },
   { name: 'list invites', method: 'get', path: (k) => `/api/kitchens/${k}/invites`, expect: LEAD_ONLY(200) },
-  { name: 'create invite', method: 'post', path: (k) => `/api/kitchens/${k}/invites`, body: { role: 'helper' }, expect: LEAD_ONLY(201) },
-  { name: 'revoke invite', method: 'delete', path: (k, f) => `/api/kitchens/${k}/invites/${f.inviteId}`, expect: LEAD_ONLY(204) },
+  {
+    name: 'create invite',
+    method: 'post',
+    path: (k) => `/api/kitchens/${k}/invites`,
+    body: { role: 'helper' },
+    expect: LEAD_ONLY(201),
+  },
+  {
+    name: 'revoke invite',
+    method: 'delete',
+    path: (k, f) => `/api/kitchens/${k}/invites/${f.inviteId}`,
+    expect: LEAD_ONLY(204),
+  },
   { name: 'list canners', method: 'get', path: (k) => `/api/kitchens/${k}/canners`, expect: MEMBER_READ },
-  { name: 'add canner', method: 'post', path: (k) => `/api/kitchens/${k}/canners`, body: canner, expect: LEAD_ONLY(201) },
+  {
+    name: 'add canner',
+    method: 'post',
+    path: (k) => `/api/kitchens/${k}/canners`,
+    body: canner,
+    expect: LEAD_ONLY(201),
+  },
   {
     name: 'edit canner',
     method: 'put',
@@ -51,7 +79,12 @@ const ROUTES: RouteCase[] = [
     body: { ...canner, name: 'Edited' },
     expect: LEAD_ONLY(200),
   },
-  { name: 'delete canner', method: 'delete', path: (k, f) => `/api/kitchens/${k}/canners/${f.cannerId}`, expect: LEAD_ONLY(204) },
+  {
+    name: 'delete canner',
+    method: 'delete',
+    path: (k, f) => `/api/kitchens/${k}/canners/${f.cannerId}`,
+    expect: LEAD_ONLY(204),
+  },
 ];
 
 describe('kitchen routes: the role matrix (e2e)', () => {
@@ -72,8 +105,15 @@ describe('kitchen routes: the role matrix (e2e)', () => {
     const i = await request(t.http).post(`/api/kitchens/${k}/invites`).set(lead).send({ role: 'watcher' }).expect(201);
     const member = await registerPerson(t.http, 'Extra');
     const j = await request(t.http).post(`/api/kitchens/${k}/invites`).set(lead).send({ role: 'helper' }).expect(201);
-    await request(t.http).post(`/api/invites/${(j.body as { code: string }).code}/redeem`).set(member.auth).expect(200);
-    return { cannerId: (c.body as { id: string }).id, inviteId: (i.body as { id: string }).id, memberId: member.user.id };
+    await request(t.http)
+      .post(`/api/invites/${(j.body as { code: string }).code}/redeem`)
+      .set(member.auth)
+      .expect(200);
+    return {
+      cannerId: (c.body as { id: string }).id,
+      inviteId: (i.body as { id: string }).id,
+      memberId: member.user.id,
+    };
   }
 
   for (const route of ROUTES) {
@@ -97,12 +137,21 @@ describe('kitchen routes: the role matrix (e2e)', () => {
 
   it("a member of kitchen A cannot reach kitchen B's members, canners or invites by id", async () => {
     const b = crew.otherKitchen.id;
-    for (const path of [`/api/kitchens/${b}`, `/api/kitchens/${b}/members`, `/api/kitchens/${b}/canners`, `/api/kitchens/${b}/invites`]) {
+    for (const path of [
+      `/api/kitchens/${b}`,
+      `/api/kitchens/${b}/members`,
+      `/api/kitchens/${b}/canners`,
+      `/api/kitchens/${b}/invites`,
+    ]) {
       const res = await request(t.http).get(path).set(crew.lead.auth);
       expect(res.status, path).toBe(404);
     }
     // Nor edit another kitchen's canner through its own kitchen's path.
-    const other = await request(t.http).post(`/api/kitchens/${b}/canners`).set(crew.outsider.auth).send(canner).expect(201);
+    const other = await request(t.http)
+      .post(`/api/kitchens/${b}/canners`)
+      .set(crew.outsider.auth)
+      .send(canner)
+      .expect(201);
     const res = await request(t.http)
       .put(`/api/kitchens/${crew.kitchen.id}/canners/${(other.body as { id: string }).id}`)
       .set(crew.lead.auth)
@@ -130,7 +179,10 @@ describe('kitchens: leads, leaving and invites (e2e)', () => {
     const me = await request(t.http).get(`/api/kitchens/${k}`).set(crew.lead.auth).expect(200);
     expect(me.body).toMatchObject({ role: 'lead', memberCount: 3, altitude: { value: 2100, unit: 'ft' }, units: 'us' });
 
-    const leave = await request(t.http).delete(`/api/kitchens/${k}/members/${crew.lead.user.id}`).set(crew.lead.auth).expect(409);
+    const leave = await request(t.http)
+      .delete(`/api/kitchens/${k}/members/${crew.lead.user.id}`)
+      .set(crew.lead.auth)
+      .expect(409);
     expect(leave.body).toMatchObject({ code: 'last_lead' });
     await request(t.http)
       .patch(`/api/kitchens/${k}/members/${crew.lead.user.id}`)
@@ -139,7 +191,11 @@ describe('kitchens: leads, leaving and invites (e2e)', () => {
       .expect(409);
 
     // With a second lead, the first may leave.
-    await request(t.http).patch(`/api/kitchens/${k}/members/${crew.helper.user.id}`).set(crew.lead.auth).send({ role: 'lead' }).expect(200);
+    await request(t.http)
+      .patch(`/api/kitchens/${k}/members/${crew.helper.user.id}`)
+      .set(crew.lead.auth)
+      .send({ role: 'lead' })
+      .expect(200);
     await request(t.http).delete(`/api/kitchens/${k}/members/${crew.lead.user.id}`).set(crew.lead.auth).expect(204);
     await request(t.http).get(`/api/kitchens/${k}`).set(crew.lead.auth).expect(404);
   });
@@ -147,7 +203,10 @@ describe('kitchens: leads, leaving and invites (e2e)', () => {
   it('a helper may leave but not remove others', async () => {
     const crew = await kitchenWithCrew(t.http);
     const k = crew.kitchen.id;
-    await request(t.http).delete(`/api/kitchens/${k}/members/${crew.watcher.user.id}`).set(crew.helper.auth).expect(403);
+    await request(t.http)
+      .delete(`/api/kitchens/${k}/members/${crew.watcher.user.id}`)
+      .set(crew.helper.auth)
+      .expect(403);
     await request(t.http).delete(`/api/kitchens/${k}/members/${crew.helper.user.id}`).set(crew.helper.auth).expect(204);
     const members = await request(t.http).get(`/api/kitchens/${k}/members`).set(crew.lead.auth).expect(200);
     expect((members.body as { role: string }[]).map((m) => m.role).sort()).toEqual(['lead', 'watcher']);
@@ -155,15 +214,22 @@ describe('kitchens: leads, leaving and invites (e2e)', () => {
 
   it('an invite code works once, with or without its dash and in any case, and not after revoking', async () => {
     const lead = await registerPerson(t.http, 'Lead');
-    const k = (await request(t.http).post('/api/kitchens').set(lead.auth).send({ name: 'Invite kitchen' }).expect(201)).body as { id: string };
-    const invite = (await request(t.http).post(`/api/kitchens/${k.id}/invites`).set(lead.auth).send({ role: 'watcher' }).expect(201))
-      .body as { id: string; code: string };
+    const k = (await request(t.http).post('/api/kitchens').set(lead.auth).send({ name: 'Invite kitchen' }).expect(201))
+      .body as { id: string };
+    const invite = (
+      await request(t.http).post(`/api/kitchens/${k.id}/invites`).set(lead.auth).send({ role: 'watcher' }).expect(201)
+    ).body as { id: string; code: string };
     expect(invite.code).toMatch(/^[2-9A-HJKMNP-Z]{4}-[2-9A-HJKMNP-Z]{4}$/);
 
     const guest = await registerPerson(t.http, 'Guest');
     const typed = invite.code.replace('-', '').toLowerCase();
     const preview = await request(t.http).get(`/api/invites/${typed}`).set(guest.auth).expect(200);
-    expect(preview.body).toMatchObject({ kitchenId: k.id, kitchenName: 'Invite kitchen', role: 'watcher', alreadyMember: false });
+    expect(preview.body).toMatchObject({
+      kitchenId: k.id,
+      kitchenName: 'Invite kitchen',
+      role: 'watcher',
+      alreadyMember: false,
+    });
     const joined = await request(t.http).post(`/api/invites/${typed}/redeem`).set(guest.auth).expect(200);
     expect(joined.body).toMatchObject({ id: k.id, role: 'watcher' });
 
@@ -171,7 +237,8 @@ describe('kitchens: leads, leaving and invites (e2e)', () => {
     const used = await request(t.http).post(`/api/invites/${invite.code}/redeem`).set(late.auth).expect(404);
     expect(used.body).toMatchObject({ code: 'invite_not_found' });
 
-    const second = (await request(t.http).post(`/api/kitchens/${k.id}/invites`).set(lead.auth).send({}).expect(201)).body as {
+    const second = (await request(t.http).post(`/api/kitchens/${k.id}/invites`).set(lead.auth).send({}).expect(201))
+      .body as {
       id: string;
       code: string;
       role: string;

@@ -13,8 +13,9 @@ export const REFRESH_COOKIE = 'jarday_refresh';
 const COOKIE_PATH = '/api/auth';
 
 function readRefreshCookie(req: Request): string | undefined {
-  const cookies = (req as Request & { cookies?: Record<string, unknown> }).cookies;
-  const value = cookies?.[REFRESH_COOKIE];
+  const cookies: unknown = (req as { cookies?: unknown }).cookies;
+  const value: unknown =
+    typeof cookies === 'object' && cookies !== null ? (cookies as Record<string, unknown>)[REFRESH_COOKIE] : undefined;
   return typeof value === 'string' && value.length > 0 && value.length < 200 ? value : undefined;
 }
 

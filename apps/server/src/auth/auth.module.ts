@@ -31,7 +31,13 @@ import { UsersRepository } from './users.repository.js';
     }),
   ],
   controllers: [AuthController],
-  providers: [AuthService, TokensService, UsersRepository, SessionsRepository, { provide: APP_GUARD, useClass: AuthGuard }],
+  providers: [
+    AuthService,
+    TokensService,
+    UsersRepository,
+    SessionsRepository,
+    { provide: APP_GUARD, useClass: AuthGuard },
+  ],
   exports: [TokensService, UsersRepository],
 })
 export class AuthModule {}

@@ -14,11 +14,18 @@ describe('toErrorBody', () => {
 
   it('hides the details of an unexpected error', () => {
     const body = toErrorBody(new TypeError("Cannot read properties of undefined (reading 'secret')"));
-    expect(body).toEqual({ statusCode: 500, code: 'internal', message: expect.not.stringContaining('secret') as string });
+    expect(body).toEqual({
+      statusCode: 500,
+      code: 'internal',
+      message: expect.not.stringContaining('secret') as string,
+    });
   });
 
   it('maps framework HTTP errors to codes', () => {
-    expect(toErrorBody(new NotFoundException('Cannot GET /api/x'))).toMatchObject({ statusCode: 404, code: 'not_found' });
+    expect(toErrorBody(new NotFoundException('Cannot GET /api/x'))).toMatchObject({
+      statusCode: 404,
+      code: 'not_found',
+    });
     expect(toErrorBody(new BadRequestException('bad'))).toMatchObject({ statusCode: 400, code: 'validation_failed' });
   });
 });

@@ -34,7 +34,12 @@ function bodyParserError(cause: unknown): ApiErrorBody | undefined {
 /** Turns any error into a JSON body a person can read; stack traces stay in the server log. */
 export function toErrorBody(error: unknown): ApiErrorBody {
   if (error instanceof AppError) {
-    return { statusCode: error.status, code: error.code, message: error.message, ...(error.issues && { issues: error.issues }) };
+    return {
+      statusCode: error.status,
+      code: error.code,
+      message: error.message,
+      ...(error.issues && { issues: error.issues }),
+    };
   }
   if (error instanceof ThrottlerException) {
     return { statusCode: 429, code: 'too_many_attempts', message: 'Too many attempts. Wait a minute and try again.' };
@@ -59,7 +64,8 @@ export class AllExceptionsFilter implements ExceptionFilter {
 
   catch(error: unknown, host: ArgumentsHost): void {
     const body = toErrorBody(error);
-    if (body.statusCode >= 500) this.logger.error(error instanceof Error ? (error.stack ?? error.message) : String(error));
+    if (body.statusCode >= 500)
+      this.logger.error(error instanceof Error ? (error.stack ?? error.message) : String(error));
     const res = host.switchToHttp().getResponse<Response>();
     res.status(body.statusCode).json(body);
   }

@@ -7,7 +7,9 @@ export const InjectDb = () => Inject(DB);
 
 @Global()
 @Module({
-  providers: [{ provide: DB, inject: [APP_CONFIG], useFactory: (config: AppConfig) => openDatabase(config.databasePath) }],
+  providers: [
+    { provide: DB, inject: [APP_CONFIG], useFactory: (config: AppConfig) => openDatabase(config.databasePath) },
+  ],
   exports: [DB],
 })
 export class DatabaseModule implements OnApplicationShutdown {

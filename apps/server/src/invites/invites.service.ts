@@ -42,7 +42,10 @@ export class InvitesService {
       const row: InviteRow = {
         id: randomUUID(),
         kitchenId,
-        code: Array.from({ length: CODE_LENGTH }, () => INVITE_CODE_ALPHABET[randomInt(INVITE_CODE_ALPHABET.length)]).join(''),
+        code: Array.from(
+          { length: CODE_LENGTH },
+          () => INVITE_CODE_ALPHABET[randomInt(INVITE_CODE_ALPHABET.length)],
+        ).join(''),
         role: input.role,
         createdBy,
         createdAt: now,

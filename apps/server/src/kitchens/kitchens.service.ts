@@ -15,8 +15,7 @@ export const toKitchenView = (k: KitchenWithRole): KitchenView => ({
   memberCount: k.memberCount,
 });
 
-const lastLead = () =>
-  new AppError('last_lead', 'A kitchen needs at least one lead: make someone else lead first');
+const lastLead = () => new AppError('last_lead', 'A kitchen needs at least one lead: make someone else lead first');
 
 /** Parsed create input (zod defaults applied). */
 interface CreateKitchen extends Omit<CreateKitchenInput, 'altitude' | 'units'> {

@@ -61,7 +61,12 @@ export async function registerPerson(http: App, name = 'Test Person'): Promise<P
     .send({ email, name, password: 'correct horse battery' })
     .expect(201);
   const body = res.body as SessionView;
-  return { user: body.user, token: body.accessToken, cookie: refreshCookie(res), auth: { Authorization: `Bearer ${body.accessToken}` } };
+  return {
+    user: body.user,
+    token: body.accessToken,
+    cookie: refreshCookie(res),
+    auth: { Authorization: `Bearer ${body.accessToken}` },
+  };
 }
 
 export function refreshCookie(res: request.Response): string {
@@ -88,8 +93,9 @@ export async function kitchenWithCrew(http: App) {
     [helper, 'helper'],
     [watcher, 'watcher'],
   ] as const) {
-    const invite = (await request(http).post(`/api/kitchens/${kitchen.id}/invites`).set(lead.auth).send({ role }).expect(201))
-      .body as { code: string };
+    const invite = (
+      await request(http).post(`/api/kitchens/${kitchen.id}/invites`).set(lead.auth).send({ role }).expect(201)
+    ).body as { code: string };
     await request(http).post(`/api/invites/${invite.code}/redeem`).set(person.auth).expect(200);
   }
   const otherKitchen = (
