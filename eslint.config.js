@@ -101,6 +101,17 @@ export default tseslint.config(
     rules: boundary(['**/apps/web/**', 'react', 'react-dom', '@mui/*'], 'The server never imports web code.'),
   },
   {
+    // A lib's build tsconfig leaves its specs and test fixtures out; its tsconfig.spec.json takes them in.
+    files: ['libs/*/src/**/*.spec.ts', 'libs/*/src/testing/**/*.ts'],
+    languageOptions: {
+      parserOptions: {
+        projectService: false,
+        project: ['libs/*/tsconfig.spec.json'],
+        tsconfigRootDir: import.meta.dirname,
+      },
+    },
+  },
+  {
     files: ['**/*.spec.ts', '**/*.spec.tsx', '**/*.e2e-spec.ts', '**/test/**/*.ts'],
     rules: {
       '@typescript-eslint/unbound-method': 'off',
