@@ -10,6 +10,7 @@ import { DatabaseModule } from './db/database.module.js';
 import { HealthModule } from './health/health.module.js';
 import { InvitesModule } from './invites/invites.module.js';
 import { KitchensModule } from './kitchens/kitchens.module.js';
+import { RecipesModule } from './recipes/recipes.module.js';
 
 /** apps/web/dist, the same depth from src/ and dist/. */
 const DEFAULT_WEB_DIST = fileURLToPath(new URL('../../web/dist', import.meta.url));
@@ -32,6 +33,7 @@ export class AppModule {
         KitchensModule,
         InvitesModule,
         CannersModule,
+        RecipesModule,
         HealthModule,
         ...(hasWeb
           ? [

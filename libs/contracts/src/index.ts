@@ -2,3 +2,4 @@ export * from './auth.js';
 export * from './errors.js';
 export * from './health.js';
 export * from './kitchens.js';
+export * from './recipes.js';

@@ -55,7 +55,14 @@ export const recipeRulesFields = {
  * boiling-water table (21 CFR 114.3; USDA Guide 1); tomato acidification is published only for pint and quart
  * jars; a jar size has at most one yield of each kind.
  */
-export const recipeRulesSchema = z.strictObject(recipeRulesFields).superRefine((recipe, ctx) => {
+export const recipeRulesSchema = z
+  .strictObject(recipeRulesFields)
+  .superRefine((recipe, ctx) => refineRecipeRules(recipe, ctx));
+
+type RecipeRulesShape = z.infer<z.ZodObject<typeof recipeRulesFields>>;
+
+/** The cross-field checks of {@link recipeRulesSchema}, for schemas that extend a recipe with more fields. */
+export function refineRecipeRules(recipe: RecipeRulesShape, ctx: z.RefinementCtx): void {
   if (recipe.productClass === 'low-acid' && recipe.processing.boilingWater !== undefined) {
     ctx.addIssue({
       code: 'custom',
@@ -90,7 +97,8 @@ export const recipeRulesSchema = z.strictObject(recipeRulesFields).superRefine((
       }
     });
   }
-});
+}
+
 /** A validated recipe, as the rules use it. */
 export type RecipeRules = z.infer<typeof recipeRulesSchema>;
 /** A recipe as given, before defaults are applied. */

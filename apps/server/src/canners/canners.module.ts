@@ -8,6 +8,6 @@ import { CannersService } from './canners.service.js';
   imports: [KitchensModule],
   controllers: [CannersController],
   providers: [CannersService, CannersRepository],
-  exports: [CannersService],
+  exports: [CannersService, CannersRepository],
 })
 export class CannersModule {}

@@ -50,6 +50,10 @@ export class KitchensRepository {
       .all();
   }
 
+  findKitchen(kitchenId: string): KitchenRow | undefined {
+    return this.db.select().from(kitchens).where(eq(kitchens.id, kitchenId)).get();
+  }
+
   findKitchenName(kitchenId: string): string | undefined {
     return this.db.select({ name: kitchens.name }).from(kitchens).where(eq(kitchens.id, kitchenId)).get()?.name;
   }

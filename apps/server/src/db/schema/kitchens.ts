@@ -1,5 +1,5 @@
 import type { AltitudeUnit, CanningMethod, GaugeType, JarSize, UnitSystem } from '@jarday/rules';
-import type { Role } from '@jarday/contracts';
+import type { RecipeData, Role } from '@jarday/contracts';
 import { index, integer, primaryKey, real, sqliteTable, text } from 'drizzle-orm/sqlite-core';
 import { users } from './users.js';
 
@@ -64,4 +64,22 @@ export const canners = sqliteTable(
     createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull(),
   },
   (t) => [index('canners_kitchen_idx').on(t.kitchenId)],
+);
+
+/** A kitchen's recipe: the validated recipe document as JSON, its name beside it for sorting. */
+export const recipes = sqliteTable(
+  'recipes',
+  {
+    id: text('id').primaryKey(),
+    kitchenId: text('kitchen_id')
+      .notNull()
+      .references(() => kitchens.id, { onDelete: 'cascade' }),
+    name: text('name').notNull(),
+    data: text('data', { mode: 'json' }).$type<RecipeData>().notNull(),
+    copiedFrom: text('copied_from'),
+    createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
+    createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull(),
+    updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull(),
+  },
+  (t) => [index('recipes_kitchen_idx').on(t.kitchenId)],
 );
