@@ -1,4 +1,4 @@
-import { type RecipeData, type RecipeInput, type RecipeView, recipeInputSchema } from '@jarday/contracts';
+import { type RecipeInput, type RecipeView, recipeInputSchema } from '@jarday/contracts';
 
 /**
  * The built-in starter set, written in Jarday's own words from published tables. Times, bands and headspaces:
