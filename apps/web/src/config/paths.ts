@@ -1,0 +1,25 @@
+/** Paths of every page, in one place so links and redirects agree. */
+export const paths = {
+  home: () => '/',
+  signIn: (next?: string) => withNext('/sign-in', next),
+  register: (next?: string) => withNext('/register', next),
+  kitchens: () => '/kitchens',
+  kitchen: (kitchenId: string) => `/kitchens/${kitchenId}`,
+  members: (kitchenId: string) => `/kitchens/${kitchenId}/members`,
+  settings: (kitchenId: string) => `/kitchens/${kitchenId}/settings`,
+  join: (code: string) => `/join/${code.replace(/-/g, '')}`,
+};
+
+function withNext(path: string, next?: string): string {
+  return next && next !== '/' ? `${path}?next=${encodeURIComponent(next)}` : path;
+}
+
+/**
+ * Accepts a return path only when it stays on this site: a path starting with one slash.
+ * Anything else (absolute URLs, protocol-relative `//host`) falls back, so a crafted link cannot send
+ * a person elsewhere after sign-in.
+ */
+export function safeReturnPath(next: string | null | undefined, fallback = '/kitchens'): string {
+  if (!next || !next.startsWith('/') || next.startsWith('//') || next.startsWith('/\\')) return fallback;
+  return next;
+}

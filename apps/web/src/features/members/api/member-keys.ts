@@ -1,0 +1,5 @@
+/** Query keys of the members feature. */
+export const memberKeys = {
+  all: ['members'] as const,
+  list: (kitchenId: string) => [...memberKeys.all, 'list', kitchenId] as const,
+};
