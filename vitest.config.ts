@@ -7,6 +7,7 @@ const here = (p: string) => fileURLToPath(new URL(p, import.meta.url));
 export const workspaceAliases = {
   '@jarday/rules': here('./libs/rules/src/index.ts'),
   '@jarday/contracts': here('./libs/contracts/src/index.ts'),
+  '@jarday/live': here('./libs/live/src/index.ts'),
 };
 
 export default defineConfig({

@@ -15,8 +15,9 @@ for (const file of files) {
     failed += 1;
     continue;
   }
+  /** @type {{ numPassedTests?: number, numFailedTests: number, numPendingTests: number, numTodoTests?: number, numFailedTestSuites: number, stats?: { expected: number, unexpected: number, flaky?: number, skipped: number }, errors?: unknown[] }} */
   const report = JSON.parse(readFileSync(file, 'utf8'));
-  if ('numPassedTests' in report) {
+  if (report.numPassedTests !== undefined) {
     // Vitest (Jest-compatible JSON)
     passed += report.numPassedTests;
     failed += report.numFailedTests;

@@ -9,6 +9,8 @@ import { validateConfig } from './config/config.schema.js';
 import { DatabaseModule } from './db/database.module.js';
 import { HealthModule } from './health/health.module.js';
 import { InvitesModule } from './invites/invites.module.js';
+import { DaysModule } from './days/days.module.js';
+import { JournalModule } from './journal/journal.module.js';
 import { KitchensModule } from './kitchens/kitchens.module.js';
 import { RecipesModule } from './recipes/recipes.module.js';
 
@@ -34,6 +36,8 @@ export class AppModule {
         InvitesModule,
         CannersModule,
         RecipesModule,
+        JournalModule,
+        DaysModule,
         HealthModule,
         ...(hasWeb
           ? [

@@ -30,7 +30,10 @@ test('a lead registers, starts a kitchen and invites a helper, who joins from a 
   const helper = await phoneContext.newPage();
   await helper.goto(new URL(link).pathname);
   await snap(helper, 'foundation-phone-1-join-signed-out');
-  await helper.getByRole('link', { name: /create an account|register/i }).first().click();
+  await helper
+    .getByRole('link', { name: /create an account|register/i })
+    .first()
+    .click();
   await register(helper, 'Bram Oyelaran', uniqueEmail('bram'));
   await expect(helper.getByRole('button', { name: /Join Orchard Row Kitchen/ })).toBeVisible();
   await snap(helper, 'foundation-phone-2-join-preview');

@@ -3,3 +3,5 @@ export * from './errors.js';
 export * from './health.js';
 export * from './kitchens.js';
 export * from './recipes.js';
+export * from './live.js';
+export * from './days.js';

@@ -9,5 +9,6 @@ import { RecipesService } from './recipes.service.js';
   imports: [KitchensModule, CannersModule],
   controllers: [RecipesController],
   providers: [RecipesService, RecipesRepository],
+  exports: [RecipesService],
 })
 export class RecipesModule {}

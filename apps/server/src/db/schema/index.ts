@@ -1,2 +1,3 @@
 export * from './kitchens.js';
 export * from './users.js';
+export * from './days.js';

@@ -1,0 +1,16 @@
+import { Module } from '@nestjs/common';
+import { CannersModule } from '../canners/canners.module.js';
+import { JournalModule } from '../journal/journal.module.js';
+import { KitchensModule } from '../kitchens/kitchens.module.js';
+import { RecipesModule } from '../recipes/recipes.module.js';
+import { DaysController } from './days.controller.js';
+import { DaysRepository } from './days.repository.js';
+import { DaysService } from './days.service.js';
+
+@Module({
+  imports: [KitchensModule, CannersModule, RecipesModule, JournalModule],
+  controllers: [DaysController],
+  providers: [DaysService, DaysRepository],
+  exports: [DaysService, DaysRepository],
+})
+export class DaysModule {}

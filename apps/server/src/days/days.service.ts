@@ -1,0 +1,240 @@
+import { randomUUID } from 'node:crypto';
+import {
+  type BatchView,
+  type createBatchSchema,
+  type createDaySchema,
+  type createLoadSchema,
+  type DaySummaryView,
+  type DayView,
+  type JournalActor,
+  type JournalEvent,
+  type LoadView,
+  rulesOf,
+} from '@jarday/contracts';
+import { JAR_SIZE_LABELS, jarsFromProduce, planProcess } from '@jarday/rules';
+import { Injectable } from '@nestjs/common';
+import type { z } from 'zod';
+import { CannersRepository } from '../canners/canners.repository.js';
+import { AppError, notFound } from '../common/app-error.js';
+import { JournalRepository } from '../journal/journal.repository.js';
+import { KitchensRepository } from '../kitchens/kitchens.repository.js';
+import { LivePublisher } from '../realtime/live-publisher.js';
+import { RecipesService } from '../recipes/recipes.service.js';
+import { type BatchRow, type DayRow, DaysRepository, type LoadRow } from './days.repository.js';
+
+/** Who did something, from where: the journal keeps both. */
+export interface Actor extends JournalActor {
+  deviceId: string | null;
+}
+
+const toBatchView = (b: BatchRow): BatchView => ({
+  id: b.id,
+  dayId: b.dayId,
+  recipeId: b.recipeId,
+  recipeName: b.recipe.name,
+  tested: b.recipe.tested,
+  jarSize: b.jarSize,
+  pack: b.pack,
+  jars: b.jars,
+  createdAt: b.createdAt.toISOString(),
+});
+
+export const toLoadView = (l: LoadRow): LoadView => ({
+  id: l.id,
+  dayId: l.dayId,
+  batchId: l.batchId,
+  number: l.number,
+  cannerId: l.cannerId,
+  cannerName: l.cannerName,
+  method: l.method,
+  jars: l.jars,
+  plan: l.plan,
+  liftedAt: l.liftedAt?.toISOString() ?? null,
+  createdAt: l.createdAt.toISOString(),
+});
+
+const toSummary = (d: DayRow, counts: { batchCount: number; loadCount: number }): DaySummaryView => ({
+  id: d.id,
+  kitchenId: d.kitchenId,
+  date: d.date,
+  title: d.title,
+  status: d.status,
+  altitude: { value: d.altitudeValue, unit: d.altitudeUnit },
+  createdAt: d.createdAt.toISOString(),
+  closedAt: d.closedAt?.toISOString() ?? null,
+  ...counts,
+});
+
+@Injectable()
+export class DaysService {
+  constructor(
+    private readonly days: DaysRepository,
+    private readonly journal: JournalRepository,
+    private readonly kitchens: KitchensRepository,
+    private readonly canners: CannersRepository,
+    private readonly recipes: RecipesService,
+    private readonly publisher: LivePublisher,
+  ) {}
+
+  /** A new day snapshots the kitchen's altitude: moving the kitchen later leaves past days as they were. */
+  create(kitchenId: string, input: z.output<typeof createDaySchema>, actor: Actor, now = new Date()): DayView {
+    const kitchen = this.kitchens.findKitchen(kitchenId);
+    if (!kitchen) throw notFound('Kitchen');
+    const id = randomUUID();
+    const events = this.days.transaction(() => {
+      this.days.insertDay({
+        id,
+        kitchenId,
+        date: input.date,
+        title: input.title,
+        altitudeValue: kitchen.altitudeValue,
+        altitudeUnit: kitchen.altitudeUnit,
+        status: 'open',
+        lastSeq: 0,
+        createdBy: actor.userId,
+        createdAt: now,
+        closedAt: null,
+      });
+      return [this.record(id, actor, now, 'day.opened', { date: input.date, title: input.title })];
+    });
+    this.publisher.publish(events);
+    return this.get(kitchenId, id);
+  }
+
+  list(kitchenId: string, status: DayRow['status'] | undefined, limit: number): DaySummaryView[] {
+    return this.days.listDays(kitchenId, status, limit).map((r) => toSummary(r.day, r));
+  }
+
+  get(kitchenId: string, dayId: string): DayView {
+    const day = this.requireDay(kitchenId, dayId);
+    return {
+      ...toSummary(day, this.days.countsFor(dayId)),
+      batches: this.days.listBatches(dayId).map(toBatchView),
+      loads: this.days.listLoads(dayId).map(toLoadView),
+      seq: this.journal.lastSeq(dayId),
+    };
+  }
+
+  close(kitchenId: string, dayId: string, actor: Actor, now = new Date()): DayView {
+    this.requireOpenDay(kitchenId, dayId);
+    const events = this.days.transaction(() => {
+      if (!this.days.closeDay(dayId, now)) throw dayClosed();
+      return [this.record(dayId, actor, now, 'day.closed', {})];
+    });
+    this.publisher.publish(events);
+    return this.get(kitchenId, dayId);
+  }
+
+  /** A recipe at a scale; the recipe is copied in, so the day's record stays true if the recipe changes later. */
+  addBatch(
+    kitchenId: string,
+    dayId: string,
+    input: z.output<typeof createBatchSchema>,
+    actor: Actor,
+    now = new Date(),
+  ): BatchView {
+    this.requireOpenDay(kitchenId, dayId);
+    const recipe = this.recipes.get(kitchenId, input.recipeId);
+    const { id: _i, kitchenId: _k, copiedFrom: _c, createdAt: _a, updatedAt: _u, ...data } = recipe;
+    let jars = input.jars;
+    if (jars === undefined && input.produce) {
+      const count = jarsFromProduce(rulesOf(data), input.jarSize, input.produce);
+      if (!count.ok) throw new AppError('plan_refused', count.reason.message);
+      jars = count.count.jarsToPrepare;
+    }
+    const row: BatchRow = {
+      id: randomUUID(),
+      dayId,
+      recipeId: recipe.id,
+      recipe: data,
+      jarSize: input.jarSize,
+      pack: input.pack,
+      jars: jars ?? 1,
+      createdAt: now,
+    };
+    const events = this.days.transaction(() => {
+      this.days.insertBatch(row);
+      return [this.record(dayId, actor, now, 'batch.added', { batch: toBatchView(row) })];
+    });
+    this.publisher.publish(events);
+    return toBatchView(row);
+  }
+
+  /**
+   * Jars of one batch in one canner. The process plan comes from the rules for the batch's recipe, jar and pack at
+   * the day's altitude in that canner; a plan the rules refuse is refused here with their reason.
+   */
+  addLoad(
+    kitchenId: string,
+    dayId: string,
+    input: z.output<typeof createLoadSchema>,
+    actor: Actor,
+    now = new Date(),
+  ): LoadView {
+    const day = this.requireOpenDay(kitchenId, dayId);
+    const batch = this.days.findBatch(dayId, input.batchId);
+    if (!batch) throw notFound('Batch');
+    const canner = this.canners.find(kitchenId, input.cannerId);
+    if (!canner) throw notFound('Canner');
+    const result = planProcess({
+      recipe: rulesOf(batch.recipe),
+      jarSize: batch.jarSize,
+      pack: batch.pack,
+      altitude: { value: day.altitudeValue, unit: day.altitudeUnit },
+      canner,
+    });
+    if (!result.ok) throw new AppError('plan_refused', result.reason.message);
+    const capacity = canner.capacity[batch.jarSize] ?? 0;
+    if (input.jars > capacity) {
+      throw new AppError(
+        'load_too_big',
+        `${canner.name} holds ${capacity} ${JAR_SIZE_LABELS[batch.jarSize].toLowerCase()} jars at a time, not ${input.jars}`,
+      );
+    }
+    const { row, events } = this.days.transaction(() => {
+      const load: LoadRow = {
+        id: randomUUID(),
+        dayId,
+        batchId: batch.id,
+        cannerId: canner.id,
+        cannerName: canner.name,
+        method: canner.method,
+        jars: input.jars,
+        number: this.days.nextLoadNumber(dayId),
+        plan: result.plan,
+        liftedAt: null,
+        createdAt: now,
+      };
+      this.days.insertLoad(load);
+      return { row: load, events: [this.record(dayId, actor, now, 'load.created', { load: toLoadView(load) })] };
+    });
+    this.publisher.publish(events);
+    return toLoadView(row);
+  }
+
+  requireDay(kitchenId: string, dayId: string): DayRow {
+    const day = this.days.findDay(kitchenId, dayId);
+    if (!day) throw notFound('Canning day');
+    return day;
+  }
+
+  requireOpenDay(kitchenId: string, dayId: string): DayRow {
+    const day = this.requireDay(kitchenId, dayId);
+    if (day.status !== 'open') throw dayClosed();
+    return day;
+  }
+
+  private record(dayId: string, actor: Actor, now: Date, type: string, payload: Record<string, unknown>): JournalEvent {
+    return this.journal.append({
+      dayId,
+      at: now.getTime(),
+      actor: { userId: actor.userId, name: actor.name },
+      deviceId: actor.deviceId,
+      type,
+      payload,
+    });
+  }
+}
+
+const dayClosed = () =>
+  new AppError('day_closed', 'This canning day is closed: its record can be read but not changed');

@@ -1,0 +1,8 @@
+import { Global, Module } from '@nestjs/common';
+import { LivePublisher } from '../realtime/live-publisher.js';
+import { JournalRepository } from './journal.repository.js';
+
+/** The journal and the publisher that fans its entries out: every domain that changes a day records through them. */
+@Global()
+@Module({ providers: [JournalRepository, LivePublisher], exports: [JournalRepository, LivePublisher] })
+export class JournalModule {}

@@ -1,0 +1,11 @@
+export * from './constants.js';
+export * from './timer.js';
+export * from './events.js';
+export * from './commands.js';
+export * from './format.js';
+export { applyTimerCommand } from './apply.js';
+export { createTimer } from './create.js';
+export { checkMinimum } from './minimum-gate.js';
+export { dueTimers, fireDue, nextDeadline, remainingMs, settle } from './schedule.js';
+export * from './idempotency.js';
+export * from './clock-sync.js';
