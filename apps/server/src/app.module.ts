@@ -12,6 +12,7 @@ import { InvitesModule } from './invites/invites.module.js';
 import { DaysModule } from './days/days.module.js';
 import { JournalModule } from './journal/journal.module.js';
 import { KitchensModule } from './kitchens/kitchens.module.js';
+import { LiveModule } from './live/live.module.js';
 import { RecipesModule } from './recipes/recipes.module.js';
 
 /** apps/web/dist, the same depth from src/ and dist/. */
@@ -38,6 +39,7 @@ export class AppModule {
         RecipesModule,
         JournalModule,
         DaysModule,
+        LiveModule,
         HealthModule,
         ...(hasWeb
           ? [

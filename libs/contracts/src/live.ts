@@ -84,6 +84,12 @@ export const timerCommandPayloadSchema = z.strictObject({
 /** Silence a timer's alarm on every device. The same as `timer:command` with `{ type: 'acknowledge' }`. */
 export const alarmAckSchema = z.strictObject({ commandId: commandIdSchema, dayId: idSchema, timerId: idSchema });
 
+/** A fresh access token for a connected device, before the old one runs out: no reconnect needed. */
+export const sessionRenewSchema = z.strictObject({
+  token: z.string({ error: 'A token is required' }).min(1).max(4096, 'The token is too long'),
+});
+export type SessionRenewPayload = z.input<typeof sessionRenewSchema>;
+
 /** RFC 5905 on-wire: `t1` is the device's clock when it sent the ping (epoch ms, fractions allowed). */
 export const clockPingSchema = z.strictObject({ t1: z.number().min(0).max(MAX_EPOCH_MS) });
 
@@ -102,6 +108,7 @@ export const CLIENT_EVENT_SCHEMAS = {
   'timer:command': timerCommandPayloadSchema,
   'alarm:ack': alarmAckSchema,
   'clock:ping': clockPingSchema,
+  'session:renew': sessionRenewSchema,
 } as const;
 export type ClientEventName = keyof typeof CLIENT_EVENT_SCHEMAS;
 
@@ -212,6 +219,7 @@ export interface ClientToServerEvents {
   'timer:command': (payload: TimerCommandPayload, ack: AckCallback<TimerAnswer>) => void;
   'alarm:ack': (payload: AlarmAckPayload, ack: AckCallback<TimerAnswer>) => void;
   'clock:ping': (payload: ClockPingPayload, ack: AckCallback<ClockPong>) => void;
+  'session:renew': (payload: SessionRenewPayload, ack: AckCallback<{ expiresAt: number }>) => void;
 }
 
 export interface ServerToClientEvents {
@@ -219,4 +227,6 @@ export interface ServerToClientEvents {
   'day:event': (event: JournalEvent) => void;
   /** A whole fresh picture, when the server cannot send a device the entries it missed (or after a restart). */
   'day:snapshot': (snapshot: DaySnapshot) => void;
+  /** The device's access token ran out: renew it (`session:renew`) or sign in again. */
+  'session:expired': (info: { message: string }) => void;
 }

@@ -28,10 +28,15 @@ export class TokensService {
 
   /** Returns the user the token names, or undefined for an expired, forged or wrong-kind token. */
   async verifyAccess(token: string): Promise<AuthUser | undefined> {
+    return (await this.verifyAccessUntil(token))?.user;
+  }
+
+  /** The user and the moment (epoch ms) the token stops working, for connections that outlive a request. */
+  async verifyAccessUntil(token: string): Promise<{ user: AuthUser; expiresAt: number } | undefined> {
     try {
-      const claims = await this.jwt.verifyAsync<AccessClaims>(token);
+      const claims = await this.jwt.verifyAsync<AccessClaims & { exp: number }>(token);
       if (claims.typ !== 'access' || typeof claims.sub !== 'string') return undefined;
-      return { id: claims.sub, email: claims.email, name: claims.name };
+      return { user: { id: claims.sub, email: claims.email, name: claims.name }, expiresAt: claims.exp * 1000 };
     } catch {
       return undefined;
     }

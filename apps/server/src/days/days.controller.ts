@@ -15,13 +15,15 @@ import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { z } from 'zod';
 import { type AuthUser, CurrentUser } from '../auth/auth.decorators.js';
 import { ApiZodBody } from '../common/openapi.js';
-import { AnyMember, KitchenRoles } from '../kitchens/kitchen-role.guard.js';
+import { AnyMember, CurrentMembership, KitchenRoles } from '../kitchens/kitchen-role.guard.js';
+import type { MembershipRow } from '../kitchens/kitchens.repository.js';
 import { type Actor, DaysService } from './days.service.js';
 
 /** REST callers may name their device (the same id the socket uses) so the journal can say where a change came from. */
-const actorOf = (user: AuthUser, device: string | undefined): Actor => ({
+const actorOf = (user: AuthUser, member: MembershipRow, device: string | undefined): Actor => ({
   userId: user.id,
   name: user.name,
+  role: member.role,
   deviceId: deviceIdSchema.safeParse(device).data ?? null,
 });
 
@@ -46,10 +48,11 @@ export class DaysController {
   create(
     @Param('kitchenId') kitchenId: string,
     @CurrentUser() user: AuthUser,
+    @CurrentMembership() member: MembershipRow,
     @Headers('x-device-id') device: string | undefined,
     @Body({ schema: createDaySchema }) body: z.output<typeof createDaySchema>,
   ): DayView {
-    return this.days.create(kitchenId, body, actorOf(user, device));
+    return this.days.create(kitchenId, body, actorOf(user, member, device));
   }
 
   @Get(':dayId')
@@ -65,9 +68,10 @@ export class DaysController {
     @Param('kitchenId') kitchenId: string,
     @Param('dayId', { schema: idSchema }) dayId: string,
     @CurrentUser() user: AuthUser,
+    @CurrentMembership() member: MembershipRow,
     @Headers('x-device-id') device: string | undefined,
   ): DayView {
-    return this.days.close(kitchenId, dayId, actorOf(user, device));
+    return this.days.close(kitchenId, dayId, actorOf(user, member, device));
   }
 
   @Post(':dayId/batches')
@@ -77,10 +81,11 @@ export class DaysController {
     @Param('kitchenId') kitchenId: string,
     @Param('dayId', { schema: idSchema }) dayId: string,
     @CurrentUser() user: AuthUser,
+    @CurrentMembership() member: MembershipRow,
     @Headers('x-device-id') device: string | undefined,
     @Body({ schema: createBatchSchema }) body: z.output<typeof createBatchSchema>,
   ): BatchView {
-    return this.days.addBatch(kitchenId, dayId, body, actorOf(user, device));
+    return this.days.addBatch(kitchenId, dayId, body, actorOf(user, member, device));
   }
 
   @Post(':dayId/loads')
@@ -90,9 +95,10 @@ export class DaysController {
     @Param('kitchenId') kitchenId: string,
     @Param('dayId', { schema: idSchema }) dayId: string,
     @CurrentUser() user: AuthUser,
+    @CurrentMembership() member: MembershipRow,
     @Headers('x-device-id') device: string | undefined,
     @Body({ schema: createLoadSchema }) body: z.output<typeof createLoadSchema>,
   ): LoadView {
-    return this.days.addLoad(kitchenId, dayId, body, actorOf(user, device));
+    return this.days.addLoad(kitchenId, dayId, body, actorOf(user, member, device));
   }
 }

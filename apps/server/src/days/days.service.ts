@@ -9,6 +9,7 @@ import {
   type JournalActor,
   type JournalEvent,
   type LoadView,
+  type Role,
   rulesOf,
 } from '@jarday/contracts';
 import { JAR_SIZE_LABELS, jarsFromProduce, planProcess } from '@jarday/rules';
@@ -20,11 +21,13 @@ import { JournalRepository } from '../journal/journal.repository.js';
 import { KitchensRepository } from '../kitchens/kitchens.repository.js';
 import { LivePublisher } from '../realtime/live-publisher.js';
 import { RecipesService } from '../recipes/recipes.service.js';
+import { TimersService } from '../timers/timers.service.js';
 import { type BatchRow, type DayRow, DaysRepository, type LoadRow } from './days.repository.js';
 
 /** Who did something, from where: the journal keeps both. */
 export interface Actor extends JournalActor {
   deviceId: string | null;
+  role: Role;
 }
 
 const toBatchView = (b: BatchRow): BatchView => ({
@@ -74,6 +77,7 @@ export class DaysService {
     private readonly canners: CannersRepository,
     private readonly recipes: RecipesService,
     private readonly publisher: LivePublisher,
+    private readonly timers: TimersService,
   ) {}
 
   /** A new day snapshots the kitchen's altitude: moving the kitchen later leaves past days as they were. */
@@ -206,9 +210,22 @@ export class DaysService {
         createdAt: now,
       };
       this.days.insertLoad(load);
-      return { row: load, events: [this.record(dayId, actor, now, 'load.created', { load: toLoadView(load) })] };
+      const created = this.record(dayId, actor, now, 'load.created', { load: toLoadView(load) });
+      // The load's process timer takes its tested minutes from the plan, never from a device.
+      const processTimer = this.timers.createInTransaction(
+        dayId,
+        {
+          kind: load.method === 'pressure' ? 'pressure-process' : 'process',
+          label: `Load ${load.number}: ${batch.recipe.name}`.slice(0, 80),
+          testedMs: result.plan.minutes * 60_000,
+          loadId: load.id,
+        },
+        actor,
+        now.getTime(),
+      );
+      return { row: load, events: [created, ...processTimer.events] };
     });
-    this.publisher.publish(events);
+    this.timers.publish(events);
     return toLoadView(row);
   }
 

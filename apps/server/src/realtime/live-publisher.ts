@@ -1,5 +1,7 @@
 import type { JournalEvent, ServerToClientEvents } from '@jarday/contracts';
 import { Injectable, Logger } from '@nestjs/common';
+
+/* eslint-disable @typescript-eslint/no-explicit-any -- the publisher only emits, whatever the other event maps are */
 import type { Server } from 'socket.io';
 
 /** The room every device of a day joins. */
@@ -12,9 +14,9 @@ export const dayRoom = (dayId: string) => `day:${dayId}`;
 @Injectable()
 export class LivePublisher {
   private readonly logger = new Logger('LivePublisher');
-  private server: Server<Record<string, never>, ServerToClientEvents> | undefined;
+  private server: Server<any, ServerToClientEvents, any, any> | undefined;
 
-  attach(server: Server<Record<string, never>, ServerToClientEvents>): void {
+  attach(server: Server<any, ServerToClientEvents, any, any>): void {
     this.server = server;
   }
 

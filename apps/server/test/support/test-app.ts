@@ -13,11 +13,13 @@ export interface TestApp {
   app: NestExpressApplication;
   http: App;
   dir: string;
+  /** Set when started with `listen`: the base URL for real socket.io clients. */
+  url: string;
   close: () => Promise<void>;
 }
 
 /** The whole app on a fresh SQLite file in a temporary folder, with the real migrations applied at boot. */
-export async function startTestApp(env: Record<string, string> = {}): Promise<TestApp> {
+export async function startTestApp(env: Record<string, string> = {}, listen = false): Promise<TestApp> {
   const dir = mkdtempSync(join(tmpdir(), 'jarday-e2e-'));
   const moduleRef = await Test.createTestingModule({
     imports: [
@@ -32,10 +34,16 @@ export async function startTestApp(env: Record<string, string> = {}): Promise<Te
   const app = moduleRef.createNestApplication<NestExpressApplication>({ bodyParser: false, logger: false });
   configureApp(app);
   await app.init();
+  let url = '';
+  if (listen) {
+    await app.listen(0, '127.0.0.1');
+    url = await app.getUrl();
+  }
   return {
     app,
     http: app.getHttpServer() as App,
     dir,
+    url,
     close: async () => {
       await app.close();
       rmSync(dir, { recursive: true, force: true });

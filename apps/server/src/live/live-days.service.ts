@@ -1,0 +1,105 @@
+import type { Ack, DayJoined, LiveError, TimerAnswer } from '@jarday/contracts';
+import type { NewTimer, TimerCommand } from '@jarday/live';
+import { Injectable } from '@nestjs/common';
+import type { Socket } from 'socket.io';
+import type { AuthUser } from '../auth/auth.decorators.js';
+import { DaysRepository } from '../days/days.repository.js';
+import { JournalRepository } from '../journal/journal.repository.js';
+import { KitchensRepository } from '../kitchens/kitchens.repository.js';
+import { dayRoom } from '../realtime/live-publisher.js';
+import { type LiveActor, TimersService } from '../timers/timers.service.js';
+
+/** What the gateway keeps on each socket. */
+export interface SocketSession {
+  user: AuthUser;
+  deviceId: string;
+  /** When the access token the device connected with (or renewed to) runs out, epoch ms. */
+  expiresAt: number;
+  /** The days this socket joined, with their kitchen. */
+  days: Map<string, string>;
+}
+
+/** How many missed entries a reconnecting device is sent; beyond that it redraws from the snapshot. */
+export const MAX_MISSED = 1000;
+
+const notFound = (): { error: LiveError } => ({ error: { code: 'not_found', message: 'Canning day not found' } });
+const notJoined = (): { error: LiveError } => ({
+  error: { code: 'not_joined', message: 'Join the day first (day:join)' },
+});
+
+/**
+ * The rules of who may see and run which day. Every call looks the member's role up again, so a role changed or
+ * a member removed mid-day takes effect on the next tap.
+ */
+@Injectable()
+export class LiveDaysService {
+  constructor(
+    private readonly days: DaysRepository,
+    private readonly kitchens: KitchensRepository,
+    private readonly journal: JournalRepository,
+    private readonly timers: TimersService,
+  ) {}
+
+  /**
+   * Joins the day's room, then reads the snapshot and the missed entries in the same synchronous turn: nothing can
+   * be published between, so the device has every entry either in the answer or from the room, never neither.
+   */
+  join(
+    socket: Socket<never, never, never, SocketSession>,
+    dayId: string,
+    sinceSeq: number | undefined,
+  ): Ack<DayJoined> {
+    const day = this.days.findDayById(dayId);
+    if (!day || !this.kitchens.findMembership(day.kitchenId, socket.data.user.id)) return notFound();
+    void socket.join(dayRoom(dayId));
+    socket.data.days.set(dayId, day.kitchenId);
+    const { timers, seq } = this.timers.snapshot(dayId);
+    const from = sinceSeq ?? seq;
+    const complete = seq - from <= MAX_MISSED;
+    return {
+      data: {
+        snapshot: { dayId, seq, serverTime: Date.now(), timers },
+        missed: complete && from < seq ? this.journal.since(dayId, from, MAX_MISSED) : [],
+        missedComplete: complete,
+      },
+    };
+  }
+
+  leave(socket: Socket<never, never, never, SocketSession>, dayId: string): Ack<{ dayId: string }> {
+    void socket.leave(dayRoom(dayId));
+    socket.data.days.delete(dayId);
+    return { data: { dayId } };
+  }
+
+  start(session: SocketSession, dayId: string, commandId: string, timer: NewTimer): Ack<TimerAnswer> {
+    const actor = this.actor(session, dayId);
+    if ('error' in actor) return actor;
+    // A process timer belongs to a load and is made with it, from the plan: a device cannot bring its own minutes.
+    if (timer.kind === 'process' || timer.kind === 'pressure-process') {
+      return {
+        error: { code: 'invalid_input', message: 'Process timers come with their load, timed from its tested plan' },
+      };
+    }
+    return this.timers.start(dayId, commandId, timer, actor);
+  }
+
+  command(
+    session: SocketSession,
+    dayId: string,
+    commandId: string,
+    timerId: string,
+    command: TimerCommand,
+  ): Ack<TimerAnswer> {
+    const actor = this.actor(session, dayId);
+    if ('error' in actor) return actor;
+    return this.timers.command(dayId, commandId, timerId, command, actor);
+  }
+
+  private actor(session: SocketSession, dayId: string): LiveActor | { error: LiveError } {
+    const kitchenId = session.days.get(dayId);
+    if (!kitchenId) return notJoined();
+    const member = this.kitchens.findMembership(kitchenId, session.user.id);
+    if (!member) return notFound();
+    return { userId: session.user.id, name: session.user.name, deviceId: session.deviceId, role: member.role };
+  }
+}
