@@ -100,9 +100,9 @@ describe('hostile input (e2e)', () => {
     let i = 0;
     for (const body of bodies) {
       const [method, path] = routes[i++ % routes.length]!;
-      const req = request(t.http)
-        [method as 'post'](method === 'get' ? `${path}${encodeURIComponent(JSON.stringify(body))}` : path)
-        .set(crew.lead.auth);
+      const agent = request(t.http);
+      const url = method === 'get' ? `${path}${encodeURIComponent(JSON.stringify(body))}` : path;
+      const req = (method === 'get' ? agent.get(url) : agent[method as 'post'](url)).set(crew.lead.auth);
       const res = await (method === 'get'
         ? req
         : req.set('Content-Type', 'application/json').send(JSON.stringify(body) ?? 'null'));
