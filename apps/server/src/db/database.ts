@@ -22,6 +22,9 @@ export function openDatabase(path: string): Db {
   sqlite.pragma('foreign_keys = ON');
   sqlite.pragma('busy_timeout = 5000');
   sqlite.pragma('synchronous = NORMAL');
+  // Every live command commits; checkpointing (which syncs) every 4,000 pages rather than 1,000 takes a quarter
+  // off a command's cost under load (npm run bench) for a WAL file of at most about 16 MB.
+  sqlite.pragma('wal_autocheckpoint = 4000');
   const db = drizzle(sqlite, { schema });
   migrate(db, { migrationsFolder: MIGRATIONS_FOLDER });
   return db;

@@ -33,15 +33,34 @@ const toEvent = (r: JournalRow): JournalEvent => ({
  */
 @Injectable()
 export class JournalRepository {
-  constructor(@InjectDb() private readonly db: Db) {}
+  /** Every command appends: the two statements are prepared once (`npm run bench` measures the difference). */
+  private readonly nextSeq;
+  private readonly insertRow;
 
-  append(entry: JournalEntryInput): JournalEvent {
-    const bumped = this.db
+  constructor(@InjectDb() private readonly db: Db) {
+    this.nextSeq = db
       .update(days)
       .set({ lastSeq: sql`${days.lastSeq} + 1` })
-      .where(eq(days.id, entry.dayId))
+      .where(eq(days.id, sql.placeholder('dayId')))
       .returning({ seq: days.lastSeq })
-      .get();
+      .prepare();
+    this.insertRow = db
+      .insert(journal)
+      .values({
+        dayId: sql.placeholder('dayId'),
+        seq: sql.placeholder('seq'),
+        at: sql.placeholder('at'),
+        actorId: sql.placeholder('actorId'),
+        actorName: sql.placeholder('actorName'),
+        deviceId: sql.placeholder('deviceId'),
+        type: sql.placeholder('type'),
+        payload: sql.placeholder('payload'),
+      })
+      .prepare();
+  }
+
+  append(entry: JournalEntryInput): JournalEvent {
+    const bumped = this.nextSeq.get({ dayId: entry.dayId });
     if (!bumped) throw new Error(`journal: no day ${entry.dayId}`);
     const row: JournalRow = {
       dayId: entry.dayId,
@@ -53,7 +72,7 @@ export class JournalRepository {
       type: entry.type,
       payload: entry.payload,
     };
-    this.db.insert(journal).values(row).run();
+    this.insertRow.run(row);
     return toEvent(row);
   }
 

@@ -16,7 +16,16 @@ const memberCount = sql<number>`(select count(*) from ${memberships} m where m.k
 
 @Injectable()
 export class KitchensRepository {
-  constructor(@InjectDb() private readonly db: Db) {}
+  /** Asked on every request and every live command: prepared once. */
+  private readonly membership;
+
+  constructor(@InjectDb() private readonly db: Db) {
+    this.membership = db
+      .select()
+      .from(memberships)
+      .where(and(eq(memberships.kitchenId, sql.placeholder('kitchenId')), eq(memberships.userId, sql.placeholder('userId'))))
+      .prepare();
+  }
 
   /** Runs `fn` in one SQLite transaction (better-sqlite3 transactions are synchronous). */
   transaction<T>(fn: () => T): T {
@@ -59,11 +68,7 @@ export class KitchensRepository {
   }
 
   findMembership(kitchenId: string, userId: string): MembershipRow | undefined {
-    return this.db
-      .select()
-      .from(memberships)
-      .where(and(eq(memberships.kitchenId, kitchenId), eq(memberships.userId, userId)))
-      .get();
+    return this.membership.get({ kitchenId, userId });
   }
 
   insertMembership(row: MembershipRow): void {
