@@ -208,3 +208,39 @@ describe('the live day over socket.io (e2e: real server on a port, real clients,
       .expect(409);
   });
 });
+
+describe('the step guide over socket.io (e2e)', () => {
+  let t: TestApp;
+  let crew: Crew;
+  beforeAll(async () => {
+    t = await startTestApp({ SIGNIN_THROTTLE_LIMIT: '1000' }, true);
+    crew = await kitchenWithCrew(t.http);
+  });
+  afterAll(() => t.close());
+
+  it('a tick reaches the other device, lands in the journal and in the next snapshot; watchers cannot tick', async () => {
+    const { day, load } = await dayWithLoad(t.http, crew.kitchen.id, crew.lead);
+    const tablet = await connectLive(t.url, crew.lead.token);
+    const phone = await connectLive(t.url, crew.helper.token);
+    const watcher = await connectLive(t.url, crew.watcher.token);
+    for (const c of [tablet, phone, watcher]) await ok(c, 'day:join', { dayId: day.id });
+    const tick = { commandId: randomUUID(), dayId: day.id, loadId: load.id, step: 'headspace' };
+    const answer = await ok<{ mark: { done: boolean; by: { name: string } } }>(phone, 'step:confirm', tick);
+    expect(answer.mark).toMatchObject({ done: true, by: { name: 'Helper' } });
+    expect(await call(phone, 'step:confirm', tick)).toEqual({ data: answer });
+    const seen = await waitForEvent(tablet, (e) => e.type === 'step.confirmed');
+    expect(seen.payload).toMatchObject({ mark: { subjectId: load.id, step: 'headspace' } });
+    expect(await call(watcher, 'step:confirm', { ...tick, commandId: randomUUID() })).toMatchObject({
+      error: { code: 'forbidden' },
+    });
+    expect(await call(phone, 'step:confirm', { ...tick, commandId: randomUUID(), loadId: randomUUID() })).toMatchObject(
+      {
+        error: { code: 'not_found' },
+      },
+    );
+    await ok(tablet, 'step:confirm', { ...tick, commandId: randomUUID(), done: false });
+    const joined = await ok<DayJoined>(phone, 'day:join', { dayId: day.id });
+    expect(joined.snapshot.steps).toEqual([expect.objectContaining({ step: 'headspace', done: false })]);
+    for (const c of [tablet, phone, watcher]) c.disconnect();
+  });
+});

@@ -20,7 +20,7 @@ async function api<T>(base: string, path: string, token: string | null, body?: u
 
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
-describe('a server killed with SIGKILL mid-process, then started again', () => {
+describe('a server killed with SIGKILL mid-process, then started again', { timeout: 60_000 }, () => {
   const dir = mkdtempSync(join(tmpdir(), 'jarday-restart-'));
   let server: ServerProcess | undefined;
   afterAll(async () => {
@@ -72,7 +72,7 @@ describe('a server killed with SIGKILL mid-process, then started again', () => {
       'timer:command',
       command(day.id, processTimer.id, {
         type: 'set-duration',
-        durationMs: 4000,
+        durationMs: 10_000,
         override: { reason: 'Restart test: a short process' },
       }),
     );
@@ -110,7 +110,7 @@ describe('a server killed with SIGKILL mid-process, then started again', () => {
     const onTime = await waitForEvent(
       tablet,
       (e) => e.type === 'timer.done' && (e.payload as { timerId: string }).timerId === processTimer.id,
-      8000,
+      15_000,
     );
     const detail = (onTime.payload as { detail: { dueAt: number; lateByMs: number }; timer: Timer }).detail;
     expect(detail.dueAt).toBe(running.timer.deadlineAt);

@@ -84,6 +84,57 @@ export const timerCommandPayloadSchema = z.strictObject({
 /** Silence a timer's alarm on every device. The same as `timer:command` with `{ type: 'acknowledge' }`. */
 export const alarmAckSchema = z.strictObject({ commandId: commandIdSchema, dayId: idSchema, timerId: idSchema });
 
+/**
+ * The step guide's steps, in the order of a canning day. Batches go through the prep steps, loads through the rest;
+ * each confirmation is a journal entry, so the day's record shows who did what and when.
+ */
+export const STEP_KEYS = [
+  'blanch',
+  'peel',
+  'simmer',
+  'warm-jars',
+  'fill',
+  'headspace',
+  'free-bubbles',
+  'wipe-rims',
+  'lids-bands',
+  'water-over-jars',
+  'wait-for-boil',
+  'process',
+  'heat-off-lid-off',
+  'rest',
+  'lift-jars',
+  'cooling-shelf',
+] as const;
+export const stepKeySchema = z.enum(STEP_KEYS, { error: `A step is one of: ${STEP_KEYS.join(', ')}` });
+export type StepKey = z.infer<typeof stepKeySchema>;
+
+/** Tick (or untick) a step of a batch or a load. */
+export const stepConfirmSchema = z
+  .strictObject({
+    commandId: commandIdSchema,
+    dayId: idSchema,
+    batchId: idSchema.optional(),
+    loadId: idSchema.optional(),
+    step: stepKeySchema,
+    done: z.boolean().default(true),
+  })
+  .refine((p) => (p.batchId === undefined) !== (p.loadId === undefined), {
+    message: 'Name either the batch or the load',
+    path: ['loadId'],
+  });
+export type StepConfirmPayload = z.input<typeof stepConfirmSchema>;
+
+/** Where a step stands for one batch or load. `at` is server epoch ms. */
+export interface StepMark {
+  subject: 'batch' | 'load';
+  subjectId: string;
+  step: StepKey;
+  done: boolean;
+  at: number;
+  by: JournalActor;
+}
+
 /** A fresh access token for a connected device, before the old one runs out: no reconnect needed. */
 export const sessionRenewSchema = z.strictObject({
   token: z.string({ error: 'A token is required' }).min(1).max(4096, 'The token is too long'),
@@ -109,6 +160,7 @@ export const CLIENT_EVENT_SCHEMAS = {
   'alarm:ack': alarmAckSchema,
   'clock:ping': clockPingSchema,
   'session:renew': sessionRenewSchema,
+  'step:confirm': stepConfirmSchema,
 } as const;
 export type ClientEventName = keyof typeof CLIENT_EVENT_SCHEMAS;
 
@@ -154,6 +206,8 @@ export interface DaySnapshot {
   seq: number;
   serverTime: number;
   timers: Timer[];
+  /** The step guide's ticks, one per batch or load and step. */
+  steps: StepMark[];
 }
 
 /** The answer to `day:join`: the snapshot, and the entries after `sinceSeq` (all of them unless `missedComplete` is false). */
@@ -208,6 +262,18 @@ export const daySnapshotSchema = z.strictObject({
   seq: seqSchema,
   serverTime: z.int().min(0).max(MAX_EPOCH_MS),
   timers: z.array(timerSchema).max(500),
+  steps: z
+    .array(
+      z.strictObject({
+        subject: z.enum(['batch', 'load']),
+        subjectId: idSchema,
+        step: stepKeySchema,
+        done: z.boolean(),
+        at: z.int().min(0).max(MAX_EPOCH_MS),
+        by: journalActorSchema,
+      }),
+    )
+    .max(5000),
 });
 
 /* ---------- the event maps (socket.io generics) ---------- */
@@ -220,6 +286,7 @@ export interface ClientToServerEvents {
   'alarm:ack': (payload: AlarmAckPayload, ack: AckCallback<TimerAnswer>) => void;
   'clock:ping': (payload: ClockPingPayload, ack: AckCallback<ClockPong>) => void;
   'session:renew': (payload: SessionRenewPayload, ack: AckCallback<{ expiresAt: number }>) => void;
+  'step:confirm': (payload: StepConfirmPayload, ack: AckCallback<{ mark: StepMark }>) => void;
 }
 
 export interface ServerToClientEvents {

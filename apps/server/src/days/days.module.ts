@@ -7,11 +7,12 @@ import { TimersModule } from '../timers/timers.module.js';
 import { DaysController } from './days.controller.js';
 import { DaysRepository } from './days.repository.js';
 import { DaysService } from './days.service.js';
+import { StepsRepository } from './steps.repository.js';
 
 @Module({
   imports: [KitchensModule, CannersModule, RecipesModule, JournalModule, TimersModule],
   controllers: [DaysController],
-  providers: [DaysService, DaysRepository],
-  exports: [DaysService, DaysRepository],
+  providers: [DaysService, DaysRepository, StepsRepository],
+  exports: [DaysService, DaysRepository, StepsRepository],
 })
 export class DaysModule {}

@@ -1,8 +1,12 @@
 import { Global, Module } from '@nestjs/common';
 import { LivePublisher } from '../realtime/live-publisher.js';
+import { CommandLedger } from './command-ledger.js';
 import { JournalRepository } from './journal.repository.js';
 
 /** The journal and the publisher that fans its entries out: every domain that changes a day records through them. */
 @Global()
-@Module({ providers: [JournalRepository, LivePublisher], exports: [JournalRepository, LivePublisher] })
+@Module({
+  providers: [JournalRepository, LivePublisher, CommandLedger],
+  exports: [JournalRepository, LivePublisher, CommandLedger],
+})
 export class JournalModule {}

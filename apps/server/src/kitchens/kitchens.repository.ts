@@ -23,7 +23,9 @@ export class KitchensRepository {
     this.membership = db
       .select()
       .from(memberships)
-      .where(and(eq(memberships.kitchenId, sql.placeholder('kitchenId')), eq(memberships.userId, sql.placeholder('userId'))))
+      .where(
+        and(eq(memberships.kitchenId, sql.placeholder('kitchenId')), eq(memberships.userId, sql.placeholder('userId'))),
+      )
       .prepare();
   }
 

@@ -1,12 +1,14 @@
-import type { Ack, DayJoined, LiveError, TimerAnswer } from '@jarday/contracts';
+import type { Ack, DayJoined, LiveError, StepConfirmPayload, StepMark, TimerAnswer } from '@jarday/contracts';
 import type { NewTimer, TimerCommand } from '@jarday/live';
 import { Injectable } from '@nestjs/common';
 import type { Socket } from 'socket.io';
 import type { AuthUser } from '../auth/auth.decorators.js';
 import { DaysRepository } from '../days/days.repository.js';
+import { StepsRepository } from '../days/steps.repository.js';
+import { CommandLedger } from '../journal/command-ledger.js';
 import { JournalRepository } from '../journal/journal.repository.js';
 import { KitchensRepository } from '../kitchens/kitchens.repository.js';
-import { dayRoom } from '../realtime/live-publisher.js';
+import { dayRoom, LivePublisher } from '../realtime/live-publisher.js';
 import { type LiveActor, TimersService } from '../timers/timers.service.js';
 
 /** What the gateway keeps on each socket. */
@@ -38,6 +40,9 @@ export class LiveDaysService {
     private readonly kitchens: KitchensRepository,
     private readonly journal: JournalRepository,
     private readonly timers: TimersService,
+    private readonly steps: StepsRepository,
+    private readonly ledger: CommandLedger,
+    private readonly publisher: LivePublisher,
   ) {}
 
   /**
@@ -58,7 +63,7 @@ export class LiveDaysService {
     const complete = seq - from <= MAX_MISSED;
     return {
       data: {
-        snapshot: { dayId, seq, serverTime: Date.now(), timers },
+        snapshot: { dayId, seq, serverTime: Date.now(), timers, steps: this.steps.listForDay(dayId) },
         missed: complete && from < seq ? this.journal.since(dayId, from, MAX_MISSED) : [],
         missedComplete: complete,
       },
@@ -93,6 +98,54 @@ export class LiveDaysService {
     const actor = this.actor(session, dayId);
     if ('error' in actor) return actor;
     return this.timers.command(dayId, commandId, timerId, command, actor);
+  }
+
+  /** A tick in the step guide, for a batch or a load of this day; a journal entry like every other change. */
+  confirmStep(session: SocketSession, p: StepConfirmPayload & { done: boolean }): Ack<{ mark: StepMark }> {
+    const actor = this.actor(session, p.dayId);
+    if ('error' in actor) return actor;
+    if (actor.role === 'watcher') {
+      return {
+        error: { code: 'forbidden', message: 'Watchers follow the board; only a lead or a helper ticks steps.' },
+      };
+    }
+    const { answer, events } = this.ledger.once<{ mark: StepMark }>(
+      'step:confirm',
+      p.dayId,
+      p.commandId,
+      actor.userId,
+      p,
+      () => {
+        const subject = p.loadId ? ('load' as const) : ('batch' as const);
+        const subjectId = (p.loadId ?? p.batchId)!;
+        const found =
+          subject === 'load' ? this.days.findLoad(p.dayId, subjectId) : this.days.findBatch(p.dayId, subjectId);
+        if (!found) return { error: { code: 'not_found', message: `No such ${subject} on this day` } };
+        if (this.days.findDayById(p.dayId)?.status !== 'open') {
+          return { error: { code: 'invalid_state', message: 'This canning day is closed: its record is read-only.' } };
+        }
+        const mark: StepMark = {
+          subject,
+          subjectId,
+          step: p.step,
+          done: p.done,
+          at: Date.now(),
+          by: { userId: actor.userId, name: actor.name },
+        };
+        this.steps.upsert(p.dayId, mark);
+        const event = this.journal.append({
+          dayId: p.dayId,
+          at: mark.at,
+          actor: mark.by,
+          deviceId: actor.deviceId,
+          type: p.done ? 'step.confirmed' : 'step.undone',
+          payload: { mark },
+        });
+        return { data: { mark }, events: [event] };
+      },
+    );
+    this.publisher.publish(events);
+    return answer;
   }
 
   private actor(session: SocketSession, dayId: string): LiveActor | { error: LiveError } {

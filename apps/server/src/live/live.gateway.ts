@@ -8,6 +8,7 @@ import {
   type LiveError,
   liveHandshakeSchema,
   type ServerToClientEvents,
+  type StepMark,
   type TimerAnswer,
 } from '@jarday/contracts';
 import { Logger } from '@nestjs/common';
@@ -113,6 +114,11 @@ export class LiveGateway implements OnGatewayInit, OnGatewayConnection {
     return this.handle(socket, 'alarm:ack', body, (p) =>
       this.live.command(socket.data, p.dayId, p.commandId, p.timerId, { type: 'acknowledge' }),
     );
+  }
+
+  @SubscribeMessage('step:confirm')
+  confirmStep(@ConnectedSocket() socket: LiveSocket, @MessageBody() body: unknown): Ack<{ mark: StepMark }> {
+    return this.handle(socket, 'step:confirm', body, (p) => this.live.confirmStep(socket.data, p));
   }
 
   /** RFC 5905's server half: t2 on arrival, t3 on answer (the same instant here, as nothing happens between). */

@@ -3,13 +3,7 @@ import { Injectable } from '@nestjs/common';
 import { and, asc, eq, isNotNull, sql } from 'drizzle-orm';
 import type { Db } from '../db/database.js';
 import { InjectDb } from '../db/database.module.js';
-import { commandLedger, days, timers } from '../db/schema/index.js';
-
-export interface LedgerRow<TAnswer = unknown> {
-  commandId: string;
-  fingerprint: string;
-  answer: TAnswer;
-}
+import { days, timers } from '../db/schema/index.js';
 
 /** Timers are stored as their JSON document; `next_deadline_at` mirrors `deadlineAt` so a restart can find them. */
 const p = sql.placeholder;
@@ -22,7 +16,13 @@ function prepare(db: Db) {
   return {
     insert: db
       .insert(timers)
-      .values({ id: p('id'), dayId: p('dayId'), data: p('data'), nextDeadlineAt: p('nextDeadlineAt'), version: p('version') })
+      .values({
+        id: p('id'),
+        dayId: p('dayId'),
+        data: p('data'),
+        nextDeadlineAt: p('nextDeadlineAt'),
+        version: p('version'),
+      })
       .prepare(),
     update: db
       .update(timers)
@@ -35,12 +35,15 @@ function prepare(db: Db) {
       .from(timers)
       .where(and(eq(timers.dayId, p('dayId')), eq(timers.id, p('id'))))
       .prepare(),
-    findById: db.select({ data: timers.data }).from(timers).where(eq(timers.id, p('id'))).prepare(),
-    dayStatus: db.select({ status: days.status }).from(days).where(eq(days.id, p('id'))).prepare(),
-    findLedger: db.select().from(commandLedger).where(eq(commandLedger.commandId, p('id'))).prepare(),
-    insertLedger: db
-      .insert(commandLedger)
-      .values({ commandId: p('commandId'), dayId: p('dayId'), userId: p('userId'), answer: p('answer'), at: p('at') })
+    findById: db
+      .select({ data: timers.data })
+      .from(timers)
+      .where(eq(timers.id, p('id')))
+      .prepare(),
+    dayStatus: db
+      .select({ status: days.status })
+      .from(days)
+      .where(eq(days.id, p('id')))
       .prepare(),
   };
 }
@@ -58,7 +61,13 @@ export class TimersRepository {
   }
 
   insert(timer: Timer): void {
-    this.q.insert.run({ id: timer.id, dayId: timer.dayId, data: timer, nextDeadlineAt: timer.deadlineAt, version: timer.version });
+    this.q.insert.run({
+      id: timer.id,
+      dayId: timer.dayId,
+      data: timer,
+      nextDeadlineAt: timer.deadlineAt,
+      version: timer.version,
+    });
   }
 
   /** Optimistic write: only over the version it was read at. False when someone else wrote first. */
@@ -106,23 +115,5 @@ export class TimersRepository {
 
   dayStatus(dayId: string): 'open' | 'closed' | undefined {
     return this.q.dayStatus.get({ id: dayId })?.status;
-  }
-
-  /** The ledger row of a command id; its answer is what this server stored for it. */
-  findLedger<TAnswer>(commandId: string): LedgerRow<TAnswer> | undefined {
-    const row = this.q.findLedger.get({ id: commandId });
-    if (!row) return undefined;
-    const stored = row.answer as { fingerprint: string; answer: TAnswer };
-    return { commandId: row.commandId, fingerprint: stored.fingerprint, answer: stored.answer };
-  }
-
-  insertLedger(dayId: string, userId: string, entry: LedgerRow, at: number): void {
-    this.q.insertLedger.run({
-      commandId: entry.commandId,
-      dayId,
-      userId,
-      answer: { fingerprint: entry.fingerprint, answer: entry.answer },
-      at,
-    });
   }
 }

@@ -2,9 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { type Ack, type JournalEvent, type LiveError, type TimerAnswer, timerJournalPayload } from '@jarday/contracts';
 import {
   applyTimerCommand,
-  commandFingerprint,
   createTimer,
-  decideCommand,
   fireDue,
   type LiveRole,
   type NewTimer,
@@ -15,6 +13,7 @@ import {
   type TimerResult,
 } from '@jarday/live';
 import { Injectable, Logger, type OnApplicationBootstrap } from '@nestjs/common';
+import { CommandLedger, type CommandOutcome } from '../journal/command-ledger.js';
 import { JournalRepository } from '../journal/journal.repository.js';
 import { LivePublisher } from '../realtime/live-publisher.js';
 import { TimerScheduler } from './timer-scheduler.js';
@@ -47,6 +46,7 @@ export class TimersService implements OnApplicationBootstrap {
     private readonly journal: JournalRepository,
     private readonly publisher: LivePublisher,
     private readonly scheduler: TimerScheduler,
+    private readonly ledger: CommandLedger,
   ) {
     this.scheduler.setHandler((id) => this.fire(id));
   }
@@ -161,28 +161,15 @@ export class TimersService implements OnApplicationBootstrap {
     for (const timer of touched.values()) this.scheduler.schedule(timer.id, timer.deadlineAt);
   }
 
-  /**
-   * Runs a command once per command id: a retry or a doubled tap gets the first answer again; the same id for a
-   * different command is refused. The ledger row is written in the command's own transaction.
-   */
   private once(
     event: string,
     dayId: string,
     commandId: string,
     payload: object,
     actor: LiveActor,
-    act: () => { data: TimerAnswer; events: JournalEvent[] } | { error: LiveError },
+    act: () => CommandOutcome<TimerAnswer>,
   ): Ack<TimerAnswer> {
-    const fingerprint = commandFingerprint({ event, dayId, actorId: actor.userId, payload });
-    const { answer, events } = this.timers.transaction(() => {
-      const decision = decideCommand(this.timers.findLedger<Ack<TimerAnswer>>(commandId), commandId, fingerprint);
-      if (decision.action === 'replay') return { answer: decision.answer, events: [] };
-      if (decision.action === 'refuse') return { answer: { error: decision.error }, events: [] };
-      const outcome = act();
-      const ack: Ack<TimerAnswer> = 'error' in outcome ? { error: outcome.error } : { data: outcome.data };
-      this.timers.insertLedger(dayId, actor.userId, { commandId, fingerprint, answer: ack }, Date.now());
-      return { answer: ack, events: 'error' in outcome ? [] : outcome.events };
-    });
+    const { answer, events } = this.ledger.once(event, dayId, commandId, actor.userId, payload, act);
     this.publish(events);
     return answer;
   }

@@ -1,5 +1,5 @@
 import type { AltitudeUnit, CanningMethod, JarSize, PackStyle, ProcessPlan } from '@jarday/rules';
-import type { RecipeData } from '@jarday/contracts';
+import type { RecipeData, StepKey } from '@jarday/contracts';
 import { index, integer, primaryKey, real, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
 import { canners, kitchens } from './kitchens.js';
 import { users } from './users.js';
@@ -115,4 +115,22 @@ export const commandLedger = sqliteTable(
     at: integer('at').notNull(),
   },
   (t) => [index('command_ledger_day_idx').on(t.dayId)],
+);
+
+/** The step guide's ticks: one row per batch or load and step, the latest word on it. */
+export const steps = sqliteTable(
+  'steps',
+  {
+    dayId: text('day_id')
+      .notNull()
+      .references(() => days.id, { onDelete: 'cascade' }),
+    subject: text('subject').$type<'batch' | 'load'>().notNull(),
+    subjectId: text('subject_id').notNull(),
+    step: text('step').$type<StepKey>().notNull(),
+    done: integer('done', { mode: 'boolean' }).notNull(),
+    at: integer('at').notNull(),
+    byUserId: text('by_user_id').notNull(),
+    byName: text('by_name').notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.dayId, t.subjectId, t.step] })],
 );
