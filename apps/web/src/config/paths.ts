@@ -7,6 +7,11 @@ export const paths = {
   kitchen: (kitchenId: string) => `/kitchens/${kitchenId}`,
   members: (kitchenId: string) => `/kitchens/${kitchenId}/members`,
   settings: (kitchenId: string) => `/kitchens/${kitchenId}/settings`,
+  recipes: (kitchenId: string) => `/kitchens/${kitchenId}/recipes`,
+  recipe: (kitchenId: string, recipeId: string) => `/kitchens/${kitchenId}/recipes/${recipeId}`,
+  newRecipe: (kitchenId: string) => `/kitchens/${kitchenId}/recipes/new`,
+  editRecipe: (kitchenId: string, recipeId: string) => `/kitchens/${kitchenId}/recipes/${recipeId}/edit`,
+  starter: (kitchenId: string, starterId: string) => `/kitchens/${kitchenId}/recipes/starters/${starterId}`,
   join: (code: string) => `/join/${code.replace(/-/g, '')}`,
 };
 
