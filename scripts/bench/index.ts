@@ -1,11 +1,13 @@
 /** `npm run bench`: prints figures; never part of the test suite's pass or fail. Needs `npm run build` first. */
 import { existsSync } from 'node:fs';
+import { benchBundle } from './bundle.js';
 import { benchFanout } from './fanout.js';
 import { benchJournal } from './journal.js';
 import { SERVER_MAIN } from './support.js';
 import { benchTimers } from './timers.js';
 
 const suites: Record<string, () => Promise<Record<string, string>>> = {
+  bundle: benchBundle,
   journal: benchJournal,
   fanout: benchFanout,
   timers: benchTimers,

@@ -67,6 +67,8 @@ describe('client payloads', () => {
       'clock:ping',
       'day:join',
       'day:leave',
+      'session:renew',
+      'step:confirm',
       'timer:command',
       'timer:start',
     ]);
@@ -99,7 +101,7 @@ describe('server messages', () => {
     expect(accepts(journalEventSchema, { ...entry, seq: 0 })).toBe(false);
     expect(accepts(journalEventSchema, { ...entry, at: 'yesterday' })).toBe(false);
     expect(accepts(journalEventSchema, { ...entry, type: 'DROP TABLE' })).toBe(false);
-    const snapshot = { dayId: DAY_ID, seq: 12, serverTime: T0 + 45 * MIN, timers: [fired.timer] };
+    const snapshot = { dayId: DAY_ID, seq: 12, serverTime: T0 + 45 * MIN, timers: [fired.timer], steps: [] };
     expect(daySnapshotSchema.parse(snapshot)).toEqual(snapshot);
   });
 });
