@@ -8,7 +8,8 @@ import { fileURLToPath } from 'node:url';
 import { hashPassword } from '../apps/server/src/auth/passwords.js';
 import { validateConfig } from '../apps/server/src/config/config.schema.js';
 import { openDatabase, type Db } from '../apps/server/src/db/database.js';
-import { canners, kitchens, memberships, users } from '../apps/server/src/db/schema/index.js';
+import { canners, kitchens, memberships, recipes, users } from '../apps/server/src/db/schema/index.js';
+import { findStarter } from '../apps/server/src/recipes/starter-recipes.js';
 import { type Seed, seedSchema } from './seed-schema.js';
 
 export const DEMO_SEED_FILE = fileURLToPath(new URL('./demo-kitchen.json', import.meta.url));

@@ -9,5 +9,7 @@ export const seedSchema = z.object({
     .min(1)
     .refine((p) => p.some((x) => x.role === 'lead'), 'A seeded kitchen needs a lead'),
   canners: z.array(createCannerSchema),
+  /** Starter recipes copied into the demo kitchen's Recipe box. */
+  recipes: z.array(z.string().startsWith('starter-')).default([]),
 });
 export type Seed = z.infer<typeof seedSchema>;

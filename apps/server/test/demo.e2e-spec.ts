@@ -45,6 +45,13 @@ describe('demo data (e2e)', () => {
       ).body as KitchenView[];
       expect(kitchens).toHaveLength(1);
       expect(kitchens[0]).toMatchObject({ name: seed.kitchen.name, role: account.role, memberCount: 3 });
+      const box = (
+        await request(t.http)
+          .get(`/api/kitchens/${kitchens[0]!.id}/recipes`)
+          .set('Authorization', `Bearer ${session.accessToken}`)
+          .expect(200)
+      ).body as { copiedFrom: string; tested: boolean }[];
+      expect(box.map((r) => r.copiedFrom).sort()).toEqual([...seed.recipes].sort());
     }
   });
 });
