@@ -49,6 +49,24 @@ export async function loadSeed(db: Db, seed: Seed, now = new Date()): Promise<bo
       tx.insert(canners)
         .values({ id: randomUUID(), kitchenId, createdAt: now, ...c })
         .run();
+    const lead = people.find((p) => p.role === 'lead');
+    for (const starterId of seed.recipes) {
+      const starter = findStarter(starterId);
+      if (!starter) throw new Error(`seed: no starter recipe ${starterId}`);
+      const { id: _id, kitchenId: _k, copiedFrom: _c, createdAt: _a, updatedAt: _u, ...data } = starter;
+      tx.insert(recipes)
+        .values({
+          id: randomUUID(),
+          kitchenId,
+          name: data.name,
+          data,
+          copiedFrom: starterId,
+          createdBy: lead?.id ?? null,
+          createdAt: now,
+          updatedAt: now,
+        })
+        .run();
+    }
   });
   return true;
 }
