@@ -17,19 +17,27 @@ import { fileURLToPath } from 'node:url';
 const RATE = 22_050;
 const OUT = fileURLToPath(new URL('../apps/web/public/sounds/', import.meta.url));
 
-/** A note: start and length in seconds, frequency in Hz, peak level 0..1. */
+/** @typedef {{ start: number, length: number, hz: number, level: number }} Note */
+
+/**
+ * A note: start and length in seconds, frequency in Hz, peak level 0..1.
+ * @param {number} start @param {number} length @param {number} hz @param {number} level
+ * @returns {Note}
+ */
 const note = (start, length, hz, level) => ({ start, length, hz, level });
 
 /**
  * Partials above the fundamental (relative level): a little 2nd and 3rd harmonic makes a tone easy to hear over
  * kitchen noise without the harshness of a square wave.
  */
+/** @type {[number, number][]} */
 const PARTIALS = [
   [1, 1],
   [2, 0.35],
   [3, 0.12],
 ];
 
+/** @param {number} t seconds into the note @param {number} length the note's length in seconds */
 function envelope(t, length) {
   const attack = 0.008;
   if (t < attack) return t / attack;
@@ -39,6 +47,7 @@ function envelope(t, length) {
   return decay * Math.max(0, tail);
 }
 
+/** @param {number} seconds @param {Note[]} notes @returns {Float64Array} */
 function render(seconds, notes) {
   const samples = new Float64Array(Math.round(seconds * RATE));
   const norm = PARTIALS.reduce((sum, [, level]) => sum + level, 0);
@@ -55,6 +64,7 @@ function render(seconds, notes) {
   return samples;
 }
 
+/** @param {Float64Array} samples -1..1 @returns {Buffer} */
 function wav(samples) {
   const data = Buffer.alloc(samples.length * 2);
   samples.forEach((v, i) => data.writeInt16LE(Math.round(Math.max(-1, Math.min(1, v)) * 32_767), i * 2));
@@ -92,7 +102,8 @@ for (const [name, samples] of Object.entries(SOUNDS)) {
   const bytes = wav(samples);
   const path = `${OUT}${name}`;
   if (check) {
-    let kept = null;
+    /** @type {Buffer | null} */
+    let kept;
     try {
       kept = readFileSync(path);
     } catch {

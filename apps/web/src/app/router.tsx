@@ -68,6 +68,24 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             { path: 'kitchens/:kitchenId', lazy: page(() => import('./routes/kitchen'), true) },
             { path: 'kitchens/:kitchenId/members', lazy: page(() => import('./routes/members'), true) },
             { path: 'kitchens/:kitchenId/settings', lazy: page(() => import('./routes/settings'), true) },
+            { path: 'kitchens/:kitchenId/recipes', lazy: page(() => import('./routes/recipes'), true) },
+            // The editor routes are their own chunks, so reading a recipe never loads the editor.
+            { path: 'kitchens/:kitchenId/recipes/new', lazy: page(() => import('./routes/recipe-new'), true) },
+            {
+              path: 'kitchens/:kitchenId/recipes/starters/:starterId',
+              lazy: page(() => import('./routes/recipe-starter'), true),
+            },
+            { path: 'kitchens/:kitchenId/recipes/:recipeId', lazy: page(() => import('./routes/recipe'), true) },
+            {
+              path: 'kitchens/:kitchenId/recipes/:recipeId/edit',
+              lazy: page(() => import('./routes/recipe-edit'), true),
+            },
+            // Canning days: the plan, and the live board and pocket view, each its own small chunk.
+            { path: 'kitchens/:kitchenId/days', lazy: page(() => import('./routes/days'), true) },
+            { path: 'kitchens/:kitchenId/days/new', lazy: page(() => import('./routes/day-new'), true) },
+            { path: 'kitchens/:kitchenId/days/:dayId', lazy: page(() => import('./routes/day'), true) },
+            { path: 'kitchens/:kitchenId/days/:dayId/board', lazy: page(() => import('./routes/board'), true) },
+            { path: 'kitchens/:kitchenId/days/:dayId/pocket', lazy: page(() => import('./routes/pocket'), true) },
           ],
         },
         { path: '*', lazy: page(() => import('./routes/not-found')) },

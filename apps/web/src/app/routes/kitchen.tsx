@@ -1,4 +1,6 @@
+import EventNote from '@mui/icons-material/EventNote';
 import Groups from '@mui/icons-material/Groups';
+import MenuBook from '@mui/icons-material/MenuBook';
 import Tune from '@mui/icons-material/Tune';
 import type { KitchenView } from '@jarday/contracts';
 import Card from '@mui/material/Card';
@@ -12,6 +14,7 @@ import type { ReactNode } from 'react';
 import { Link as RouterLink, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '../../components/ui/page-header';
 import { paths } from '../../config/paths';
+import { dayPaths } from '../../features/day/utils/day-paths';
 import { kitchenQueryOptions } from '../../features/kitchens/api/get-kitchen';
 import { CanningCautions } from '../../features/kitchens/components/canning-cautions';
 import { KitchenSummary } from '../../features/kitchens/components/kitchen-summary';
@@ -56,6 +59,26 @@ function KitchenHome({ kitchen }: { kitchen: KitchenView }) {
       />
       <Stack spacing={4}>
         <Grid container spacing={2} component="nav" aria-label="Kitchen pages">
+          <Grid size={{ xs: 12, sm: 6 }}>
+            <Tile
+              to={dayPaths.list(kitchen.id)}
+              icon={<EventNote fontSize="inherit" />}
+              title="Canning days"
+              text={
+                lead
+                  ? 'Start a day, plan its loads, open the Counter board.'
+                  : 'Open the Counter board or the Pocket view.'
+              }
+            />
+          </Grid>
+          <Grid size={{ xs: 12, sm: 6 }}>
+            <Tile
+              to={paths.recipes(kitchen.id)}
+              icon={<MenuBook fontSize="inherit" />}
+              title="Recipe box"
+              text={lead ? 'Tested recipes, their process tables and sources.' : 'Tested recipes and their times.'}
+            />
+          </Grid>
           <Grid size={{ xs: 12, sm: 6 }}>
             <Tile
               to={paths.members(kitchen.id)}
