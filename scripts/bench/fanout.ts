@@ -24,7 +24,8 @@ function connect(url: string, auth?: object): Promise<Socket> {
 
 async function inBatches<T>(n: number, size: number, make: (i: number) => Promise<T>): Promise<T[]> {
   const out: T[] = [];
-  for (let i = 0; i < n; i += size) out.push(...(await Promise.all(Array.from({ length: Math.min(size, n - i) }, (_, j) => make(i + j)))));
+  for (let i = 0; i < n; i += size)
+    out.push(...(await Promise.all(Array.from({ length: Math.min(size, n - i) }, (_, j) => make(i + j)))));
   return out;
 }
 
@@ -37,10 +38,12 @@ interface Rig {
 async function measure(rig: Rig): Promise<number[]> {
   const latencies: number[] = [];
   const sentAt = new Map<string, number>();
-  for (const room of rig.devices) for (const s of room) rig.onReceive(s, (tag) => {
-    const t0 = sentAt.get(tag);
-    if (t0 !== undefined) latencies.push(performance.now() - t0);
-  });
+  for (const room of rig.devices)
+    for (const s of room)
+      rig.onReceive(s, (tag) => {
+        const t0 = sentAt.get(tag);
+        if (t0 !== undefined) latencies.push(performance.now() - t0);
+      });
   for (let round = 0; round < ROUNDS; round++) {
     const start = performance.now();
     for (let d = 0; d < DAYS; d++) {
@@ -60,7 +63,11 @@ export async function benchFanout(): Promise<Record<string, string>> {
   const server = await startJarday();
   const base = server.url;
   const members = await inBatches(PER_DAY, PER_DAY, (i) =>
-    api<SessionView>(base, '/api/auth/register', null, { email: `bench${i}@kitchen.test`, name: `Bench ${i}`, password: 'bench password 123' }),
+    api<SessionView>(base, '/api/auth/register', null, {
+      email: `bench${i}@kitchen.test`,
+      name: `Bench ${i}`,
+      password: 'bench password 123',
+    }),
   );
   const lead = members[0]!.accessToken;
   const kitchen = await api<{ id: string }>(base, '/api/kitchens', lead, { name: 'Bench kitchen' });
@@ -68,7 +75,9 @@ export async function benchFanout(): Promise<Record<string, string>> {
     const invite = await api<{ code: string }>(base, `/api/kitchens/${kitchen.id}/invites`, lead, { role: 'helper' });
     await api(base, `/api/invites/${invite.code}/redeem`, m.accessToken, {});
   }
-  const days = await inBatches(DAYS, 25, (d) => api<{ id: string }>(base, `/api/kitchens/${kitchen.id}/days`, lead, { date: '2026-08-01', title: `Day ${d}` }));
+  const days = await inBatches(DAYS, 25, (d) =>
+    api<{ id: string }>(base, `/api/kitchens/${kitchen.id}/days`, lead, { date: '2026-08-01', title: `Day ${d}` }),
+  );
   const devices = await inBatches(DAYS, 25, async (d) =>
     Promise.all(
       members.map(async (m, i) => {
@@ -98,7 +107,11 @@ export async function benchFanout(): Promise<Record<string, string>> {
   await server.stop();
 
   // ---- bare socket.io ----
-  const bare = await startProcess([join(ROOT, 'scripts/bench/bare-server.mjs')], {}, async (url) => (await fetch(`${url}/health`)).ok);
+  const bare = await startProcess(
+    [join(ROOT, 'scripts/bench/bare-server.mjs')],
+    {},
+    async (url) => (await fetch(`${url}/health`)).ok,
+  );
   const bareDevices = await inBatches(DAYS, 25, async (d) =>
     Promise.all(
       Array.from({ length: PER_DAY }, async () => {

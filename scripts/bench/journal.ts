@@ -13,8 +13,12 @@ const N = 20_000;
 
 export async function benchJournal(): Promise<Record<string, string>> {
   const dist = (p: string) => pathToFileURL(join(ROOT, 'apps/server/dist', p)).href;
-  const { openDatabase } = (await import(dist('db/database.js'))) as typeof import('../../apps/server/src/db/database.js');
-  const { JournalRepository } = (await import(dist('journal/journal.repository.js'))) as typeof import('../../apps/server/src/journal/journal.repository.js');
+  const { openDatabase } = (await import(
+    dist('db/database.js')
+  )) as typeof import('../../apps/server/src/db/database.js');
+  const { JournalRepository } = (await import(
+    dist('journal/journal.repository.js')
+  )) as typeof import('../../apps/server/src/journal/journal.repository.js');
 
   const dir = mkdtempSync(join(tmpdir(), 'jarday-journal-bench-'));
   const db = openDatabase(join(dir, 'jarday.sqlite'));
@@ -30,7 +34,16 @@ export async function benchJournal(): Promise<Record<string, string>> {
 
   let t0 = performance.now();
   for (let i = 0; i < N; i++) {
-    db.transaction(() => repo.append({ dayId: 'd1', at: now + i, actor: { userId: 'u1', name: 'B' }, deviceId: 'bench-device', type: 'timer.done', payload }));
+    db.transaction(() =>
+      repo.append({
+        dayId: 'd1',
+        at: now + i,
+        actor: { userId: 'u1', name: 'B' },
+        deviceId: 'bench-device',
+        type: 'timer.done',
+        payload,
+      }),
+    );
   }
   const jardayPerSec = N / ((performance.now() - t0) / 1000);
 
@@ -40,7 +53,9 @@ export async function benchJournal(): Promise<Record<string, string>> {
   const insert = raw.prepare(
     'insert into journal (day_id, seq, at, actor_id, actor_name, device_id, type, payload) values (?, ?, ?, ?, ?, ?, ?, ?)',
   );
-  const one = raw.transaction((i: number) => insert.run('d2', i + 1, now + i, 'u1', 'B', 'bench-device', 'timer.done', JSON.stringify(payload)));
+  const one = raw.transaction((i: number) =>
+    insert.run('d2', i + 1, now + i, 'u1', 'B', 'bench-device', 'timer.done', JSON.stringify(payload)),
+  );
   t0 = performance.now();
   for (let i = 0; i < N; i++) one(i);
   const rawPerSec = N / ((performance.now() - t0) / 1000);

@@ -44,7 +44,11 @@ export interface Proc {
 }
 
 /** Starts a Node script as its own process and waits until `ready` answers. */
-export async function startProcess(args: string[], env: Record<string, string>, ready: (url: string) => Promise<boolean>): Promise<Proc> {
+export async function startProcess(
+  args: string[],
+  env: Record<string, string>,
+  ready: (url: string) => Promise<boolean>,
+): Promise<Proc> {
   const port = await freePort();
   // BENCH_NODE_ARGS, e.g. "--cpu-prof --cpu-prof-dir=/tmp/prof", to profile the servers under load.
   const nodeArgs = (process.env.BENCH_NODE_ARGS ?? '').split(' ').filter(Boolean);

@@ -15,17 +15,31 @@ const LEAD_IN_MS = 15_000;
 export async function benchTimers(): Promise<Record<string, string>> {
   const server = await startJarday();
   const base = server.url;
-  const lead = await api<SessionView>(base, '/api/auth/register', null, { email: 'timers@kitchen.test', name: 'Timer bench', password: 'bench password 123' });
+  const lead = await api<SessionView>(base, '/api/auth/register', null, {
+    email: 'timers@kitchen.test',
+    name: 'Timer bench',
+    password: 'bench password 123',
+  });
   const token = lead.accessToken;
   const kitchen = await api<{ id: string }>(base, '/api/kitchens', token, { name: 'Timer kitchen' });
-  const days = await Promise.all(Array.from({ length: DAYS }, (_, d) => api<{ id: string }>(base, `/api/kitchens/${kitchen.id}/days`, token, { date: '2026-08-02', title: `Day ${d}` })));
+  const days = await Promise.all(
+    Array.from({ length: DAYS }, (_, d) =>
+      api<{ id: string }>(base, `/api/kitchens/${kitchen.id}/days`, token, { date: '2026-08-02', title: `Day ${d}` }),
+    ),
+  );
 
   const deadlines = new Map<string, number>();
   const lateness: number[] = [];
   const sockets: Socket[] = [];
   for (const [d, day] of days.entries()) {
     for (let i = 0; i < 2; i++) {
-      const s = io(base, { path: '/socket.io', transports: ['websocket'], forceNew: true, reconnection: false, auth: { token, deviceId: `timer-${d}-${i}` } });
+      const s = io(base, {
+        path: '/socket.io',
+        transports: ['websocket'],
+        forceNew: true,
+        reconnection: false,
+        auth: { token, deviceId: `timer-${d}-${i}` },
+      });
       await new Promise<void>((r) => s.once('connect', () => r()));
       await s.emitWithAck('day:join', { dayId: day.id });
       s.on('day:event', (e: { type: string; payload: { timerId: string } }) => {

@@ -244,3 +244,31 @@ describe('the step guide over socket.io (e2e)', () => {
     for (const c of [tablet, phone, watcher]) c.disconnect();
   });
 });
+
+describe('lifting a load (e2e)', () => {
+  let t: TestApp;
+  let crew: Crew;
+  beforeAll(async () => {
+    t = await startTestApp({ SIGNIN_THROTTLE_LIMIT: '1000' }, true);
+    crew = await kitchenWithCrew(t.http);
+  });
+  afterAll(() => t.close());
+
+  it("starting a load's cooling rest records when its jars were lifted, once", async () => {
+    const { day, load } = await dayWithLoad(t.http, crew.kitchen.id, crew.lead);
+    const phone = await connectLive(t.url, crew.helper.token);
+    await ok(phone, 'day:join', { dayId: day.id });
+    const rest = { kind: 'cooling-rest', label: 'Load 1 cooling', loadId: load.id, startNow: true };
+    const started = await ok<TimerAnswer>(phone, 'timer:start', { commandId: randomUUID(), dayId: day.id, timer: rest });
+    expect(started.timer.durationMs).toBe(12 * 3600_000); // USDA Guide: cool undisturbed 12 to 24 hours
+    const lifted = await waitForEvent(phone, (e) => e.type === 'load.lifted');
+    const view = (await request(t.http).get(`/api/kitchens/${crew.kitchen.id}/days/${day.id}`).set(crew.lead.auth)).body as {
+      loads: { id: string; liftedAt: string | null }[];
+    };
+    expect(view.loads[0]?.liftedAt).toBe(lifted.at);
+    expect(await call(phone, 'timer:start', { commandId: randomUUID(), dayId: day.id, timer: rest })).toMatchObject({
+      error: { code: 'invalid_state' },
+    });
+    phone.disconnect();
+  });
+});

@@ -99,6 +99,14 @@ export class DaysRepository {
       .get();
   }
 
+  setLifted(dayId: string, loadId: string, at: Date): void {
+    this.db
+      .update(loads)
+      .set({ liftedAt: at })
+      .where(and(eq(loads.dayId, dayId), eq(loads.id, loadId)))
+      .run();
+  }
+
   listLoads(dayId: string): LoadRow[] {
     return this.db.select().from(loads).where(eq(loads.dayId, dayId)).orderBy(asc(loads.number)).all();
   }

@@ -1,9 +1,18 @@
-import type { Ack, DayJoined, LiveError, StepConfirmPayload, StepMark, TimerAnswer } from '@jarday/contracts';
+import type {
+  Ack,
+  DayJoined,
+  JournalEvent,
+  LiveError,
+  StepConfirmPayload,
+  StepMark,
+  TimerAnswer,
+} from '@jarday/contracts';
 import type { NewTimer, TimerCommand } from '@jarday/live';
 import { Injectable } from '@nestjs/common';
 import type { Socket } from 'socket.io';
 import type { AuthUser } from '../auth/auth.decorators.js';
 import { DaysRepository } from '../days/days.repository.js';
+import { toLoadView } from '../days/days.service.js';
 import { StepsRepository } from '../days/steps.repository.js';
 import { CommandLedger } from '../journal/command-ledger.js';
 import { JournalRepository } from '../journal/journal.repository.js';
@@ -85,7 +94,32 @@ export class LiveDaysService {
         error: { code: 'invalid_input', message: 'Process timers come with their load, timed from its tested plan' },
       };
     }
+    // The cooling rest of a load starts when its jars are lifted out: the moment the band gate counts from.
+    if (timer.kind === 'cooling-rest' && timer.loadId) {
+      const loadId = timer.loadId;
+      return this.timers.start(dayId, commandId, timer, actor, (now) => this.lift(dayId, loadId, actor, now));
+    }
     return this.timers.start(dayId, commandId, timer, actor);
+  }
+
+  private lift(dayId: string, loadId: string, actor: LiveActor, now: number): { error: LiveError } | JournalEvent[] {
+    const load = this.days.findLoad(dayId, loadId);
+    if (!load) return { error: { code: 'not_found', message: 'No such load on this day' } };
+    if (load.liftedAt) {
+      return { error: { code: 'invalid_state', message: `Load ${load.number} was already lifted out and is cooling` } };
+    }
+    this.days.setLifted(dayId, loadId, new Date(now));
+    const lifted = { ...load, liftedAt: new Date(now) };
+    return [
+      this.journal.append({
+        dayId,
+        at: now,
+        actor: { userId: actor.userId, name: actor.name },
+        deviceId: actor.deviceId,
+        type: 'load.lifted',
+        payload: { load: toLoadView(lifted) },
+      }),
+    ];
   }
 
   command(

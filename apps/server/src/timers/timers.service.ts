@@ -73,10 +73,20 @@ export class TimersService implements OnApplicationBootstrap {
     return this.timers.transaction(() => ({ timers: this.timers.listForDay(dayId), seq: this.journal.lastSeq(dayId) }));
   }
 
-  /** A new timer on a day, from a device. */
-  start(dayId: string, commandId: string, input: NewTimer, actor: LiveActor, now = Date.now()): Ack<TimerAnswer> {
+  /**
+   * A new timer on a day, from a device. `alongside` runs in the same transaction before the timer is made (lifting
+   * a load with its cooling rest, say); its refusal refuses the command, its events go to the journal first.
+   */
+  start(
+    dayId: string,
+    commandId: string,
+    input: NewTimer,
+    actor: LiveActor,
+    alongside?: (now: number) => { error: LiveError } | JournalEvent[],
+  ): Ack<TimerAnswer> {
     return this.once('timer:start', dayId, commandId, { input }, actor, () => {
       if (this.timers.dayStatus(dayId) !== 'open') return { error: closedDay() };
+      const now = Date.now();
       const result = createTimer(input, {
         now,
         actorRole: actor.role,
@@ -85,8 +95,13 @@ export class TimersService implements OnApplicationBootstrap {
         dayId,
       });
       if (!result.ok) return { error: result.error };
+      const before = alongside?.(now) ?? [];
+      if (!Array.isArray(before)) return before;
       this.timers.insert(result.timer);
-      return { data: { timer: result.timer, noop: false }, events: this.record(result.events, result.timer, actor) };
+      return {
+        data: { timer: result.timer, noop: false },
+        events: [...before, ...this.record(result.events, result.timer, actor)],
+      };
     });
   }
 

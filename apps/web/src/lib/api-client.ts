@@ -1,3 +1,4 @@
+import { liveDeviceId } from './device-id';
 import type { ApiErrorBody } from '@jarday/contracts';
 import { API_BASE } from '../config/env';
 
@@ -87,6 +88,8 @@ async function send(path: string, options: RequestOptions, token: string | null)
   const headers: Record<string, string> = { Accept: 'application/json' };
   if (options.body !== undefined) headers['Content-Type'] = 'application/json';
   if (token) headers.Authorization = `Bearer ${token}`;
+  // The journal names the device a change came from, for REST changes as for socket commands.
+  headers['X-Device-Id'] = liveDeviceId();
   try {
     return await fetch(`${API_BASE}${path}`, {
       method: options.method ?? 'GET',

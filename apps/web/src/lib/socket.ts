@@ -1,3 +1,4 @@
+import { liveDeviceId } from './device-id';
 import type { Ack, AckCallback, ClientToServerEvents, LiveError, ServerToClientEvents } from '@jarday/contracts';
 import { io, type Socket } from 'socket.io-client';
 
@@ -18,10 +19,11 @@ export interface LiveAuth {
 }
 
 /** Failures that happen on this side of the wire, before or instead of a server answer. */
+export { liveDeviceId };
+
 export type DeviceError = { code: 'offline' | 'no_answer'; message: string };
 export type LiveResult<T> = { data: T } | { error: LiveError | DeviceError };
 
-const DEVICE_KEY = 'jarday-device-id';
 const signedOut: LiveAuth = {
   getToken: () => null,
   renew: () => Promise.resolve(null),
@@ -29,23 +31,6 @@ const signedOut: LiveAuth = {
 };
 let auth: LiveAuth = signedOut;
 let socket: LiveSocket | null = null;
-
-/**
- * The device id the journal names: random, kept in local storage so the same tablet is the same device all day
- * (and the next). Falls back to a per-tab id where storage is blocked.
- */
-export function liveDeviceId(): string {
-  try {
-    const kept = window.localStorage.getItem(DEVICE_KEY);
-    if (kept && /^[A-Za-z0-9_-]{8,64}$/.test(kept)) return kept;
-    const made = crypto.randomUUID();
-    window.localStorage.setItem(DEVICE_KEY, made);
-    return made;
-  } catch {
-    return (fallbackId ??= crypto.randomUUID());
-  }
-}
-let fallbackId: string | undefined;
 
 /** Connects the live socket to the session; returns a function that disconnects it. */
 export function bindLiveAuth(next: LiveAuth): () => void {

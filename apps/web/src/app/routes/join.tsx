@@ -3,9 +3,9 @@ import Alert from '@mui/material/Alert';
 import Button from '@mui/material/Button';
 import Stack from '@mui/material/Stack';
 import { useQueryClient } from '@tanstack/react-query';
-import { Link as RouterLink, useNavigate, useParams } from 'react-router-dom';
+import { Link as RouterLink, useNavigate, useParams, useSearchParams } from 'react-router-dom';
 import { CenteredCard } from '../../components/layouts/centered-card';
-import { paths } from '../../config/paths';
+import { paths, safeReturnPath } from '../../config/paths';
 import { useSessionStatus } from '../../features/auth/stores/session-store';
 import { JoinInvite } from '../../features/invites/components/join-invite';
 import { kitchenKeys } from '../../features/kitchens/api/kitchen-keys';
@@ -16,6 +16,8 @@ export default function JoinRoute() {
   const signedIn = useSessionStatus() === 'signed-in';
   const navigate = useNavigate();
   const queryClient = useQueryClient();
+  // Where to go once joined, e.g. the day's Pocket view when the invite came from the Counter board's QR code.
+  const next = useSearchParams()[0].get('next');
 
   if (!parsed.success) {
     return (
@@ -25,7 +27,7 @@ export default function JoinRoute() {
     );
   }
   const code = parsed.data;
-  const here = paths.join(code);
+  const here = next ? `${paths.join(code)}?next=${encodeURIComponent(next)}` : paths.join(code);
 
   if (!signedIn) {
     return (
@@ -48,12 +50,18 @@ export default function JoinRoute() {
   const joined = (kitchen: KitchenView) => {
     queryClient.setQueryData(kitchenKeys.detail(kitchen.id), kitchen);
     void queryClient.invalidateQueries({ queryKey: kitchenKeys.list() });
-    void navigate(paths.kitchen(kitchen.id), { replace: true });
+    void navigate(next ? safeReturnPath(next, paths.kitchen(kitchen.id)) : paths.kitchen(kitchen.id), {
+      replace: true,
+    });
   };
 
   return (
     <CenteredCard title="Join a kitchen">
-      <JoinInvite code={code} onJoined={joined} onOpenKitchen={(id) => void navigate(paths.kitchen(id))} />
+      <JoinInvite
+        code={code}
+        onJoined={joined}
+        onOpenKitchen={(id) => void navigate(next ? safeReturnPath(next, paths.kitchen(id)) : paths.kitchen(id))}
+      />
     </CenteredCard>
   );
 }
