@@ -43,7 +43,7 @@ export default tseslint.config(
       globals: { ...globals.node },
       parserOptions: {
         projectService: {
-          allowDefaultProject: ['*.js', '*.ts', 'scripts/*.mjs', 'apps/web/e2e/*.mjs'],
+          allowDefaultProject: ['*.js', '*.ts', 'scripts/*.mjs', 'scripts/bench/*.mjs', 'apps/web/e2e/*.mjs'],
           defaultProject: 'tsconfig.base.json',
         },
         tsconfigRootDir: import.meta.dirname,
@@ -71,6 +71,11 @@ export default tseslint.config(
         }),
       ],
     },
+  },
+  {
+    // Plain-JS tooling scripts carry no types to check against.
+    files: ['**/*.mjs'],
+    ...tseslint.configs.disableTypeChecked,
   },
   {
     // Nest injects by the runtime value of a constructor's parameter types: a type-only import would inject undefined.

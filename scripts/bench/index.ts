@@ -3,11 +3,13 @@ import { existsSync } from 'node:fs';
 import { benchBundle } from './bundle.js';
 import { benchFanout } from './fanout.js';
 import { benchJournal } from './journal.js';
+import { benchRenders } from './renders.js';
 import { SERVER_MAIN } from './support.js';
 import { benchTimers } from './timers.js';
 
 const suites: Record<string, () => Promise<Record<string, string>>> = {
   bundle: benchBundle,
+  renders: benchRenders,
   journal: benchJournal,
   fanout: benchFanout,
   timers: benchTimers,

@@ -1,6 +1,7 @@
 import type { Timer } from '@jarday/contracts';
 import Box from '@mui/material/Box';
 import LinearProgress from '@mui/material/LinearProgress';
+import { countRender } from '../../../lib/render-counter';
 import { useTicking } from '../hooks/use-ticking';
 import { useLiveStore } from '../stores/live-store';
 import { formatClock, leftOn, progressOf } from '../utils/format-clock';
@@ -25,6 +26,7 @@ interface CountdownProps {
  * this component re-renders as the seconds change.
  */
 export function Countdown({ timer, size = 'board', offsetMs, label }: CountdownProps) {
+  countRender('Countdown');
   const storeOffset = useLiveStore((s) => s.clockOffsetMs);
   const offset = offsetMs ?? storeOffset;
   const text = useTicking(() => formatClock(leftOn(timer, Date.now(), offset)));

@@ -1,3 +1,4 @@
+import { countCommits, countRender } from '../../../lib/render-counter';
 import Countertops from '@mui/icons-material/Countertops';
 import Inventory2 from '@mui/icons-material/Inventory2';
 import MenuBook from '@mui/icons-material/MenuBook';
@@ -8,7 +9,7 @@ import Box from '@mui/material/Box';
 import Link from '@mui/material/Link';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
-import { lazy, Suspense, useState } from 'react';
+import { lazy, Profiler, Suspense, useState } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
 import type { LiveAuth } from '../../../lib/socket';
 import { useAlarmAlert } from '../hooks/use-alarm-alert';
@@ -59,6 +60,7 @@ export function cannerGroups(loads: readonly LoadView[]): CannerGroup[] {
  * loads and step guides; prep, stove, jars and the cooling shelf beside them. Alarms take the whole screen.
  */
 export function CounterBoard({ kitchen, day, recipes, auth, links }: LiveDayProps) {
+  countRender('CounterBoard');
   useLiveDay(day.id, auth);
   const wakeLock = useWakeLock();
   const [scheme, toggleScheme] = useBoardScheme();
@@ -72,119 +74,125 @@ export function CounterBoard({ kitchen, day, recipes, auth, links }: LiveDayProp
   const common = { run, canCommand };
 
   return (
-    <LiveScreen scheme={scheme} testId="counter-board">
-      <BoardBar
-        title={day.title}
-        backHref={links.plan}
-        backLabel="Back to the day plan"
-        scheme={scheme}
-        onToggleScheme={toggleScheme}
-        wakeLock={wakeLock}
-        onPhone={() => setPhones((p) => !p)}
-        phoneOpen={phones}
-      />
-      <Stack spacing={2} sx={{ p: { xs: 1.5, md: 2 } }}>
-        <ConnectionBanner />
-        {day.status === 'closed' ? (
-          <Typography sx={{ fontSize: '1.2rem' }}>This day is closed: the board is read-only.</Typography>
-        ) : null}
-        {phones ? (
-          <Suspense fallback={null}>
-            <PhoneJoinPanel
-              kitchenId={kitchen.id}
-              kitchenName={kitchen.name}
-              dayTitle={day.title}
-              pocketPath={links.pocket}
-              isLead={kitchen.role === 'lead'}
-            />
-          </Suspense>
-        ) : null}
-        <Box
-          sx={{
-            display: 'grid',
-            gap: 2,
-            gridTemplateColumns: { xs: '1fr', md: 'minmax(0, 2fr) minmax(0, 1fr)' },
-            alignItems: 'start',
-          }}
-        >
-          <Stack spacing={2}>
-            {day.loads.length === 0 ? (
-              <StationCard title="Canners" icon={<OutdoorGrill fontSize="inherit" />}>
-                <Typography sx={{ fontSize: '1.3rem' }}>No loads yet.</Typography>
-                <Link component={RouterLink} to={links.plan} sx={{ fontSize: '1.2rem' }}>
-                  Make a load on the day plan
-                </Link>
-              </StationCard>
-            ) : (
-              cannerGroups(day.loads).map((c) => (
-                <CannerStation
-                  key={c.cannerId}
-                  canner={c}
-                  timers={timers}
-                  batches={day.batches}
-                  planHref={links.plan}
-                  confirm={confirm}
-                  {...common}
-                />
-              ))
-            )}
-            {day.batches.length > 0 ? (
-              <StationCard title="Batches" icon={<MenuBook fontSize="inherit" />} subtitle="Prep steps, batch by batch">
-                {day.batches.map((b) => (
-                  <Box key={b.id} sx={{ borderTop: 1, borderColor: 'divider', pt: 2 }}>
-                    <Typography sx={{ fontSize: '1.3rem', fontWeight: 700, mb: 1 }}>{b.recipeName}</Typography>
-                    <StepGuide
-                      name={b.recipeName}
-                      steps={batchSteps(b, prepSteps(b.recipeId), day.loads.find((l) => l.batchId === b.id)?.plan)}
-                      who={{ subject: 'batch', id: b.id }}
-                      confirm={confirm}
-                      canCommand={canCommand}
-                      compact
-                    />
-                  </Box>
-                ))}
-              </StationCard>
-            ) : null}
-          </Stack>
-          <Stack spacing={2}>
-            <TimerStation
-              title="Prep"
-              icon={<Countertops fontSize="inherit" />}
-              timers={timers.filter((t) => t.kind === 'blanch' || t.kind === 'custom')}
-              presets={prepPresets()}
-              presetsTitle="Start a blanch dip"
-              empty="Blanch dips for peeling: 30 to 60 seconds."
-              testId="station-prep"
-              {...common}
-            />
-            <TimerStation
-              title="Stove"
-              icon={<OutdoorGrill fontSize="inherit" />}
-              timers={timers.filter((t) => t.kind === 'simmer')}
-              presets={stovePresets(day.batches.flatMap((b) => prepSteps(b.recipeId) ?? []))}
-              presetsTitle="Start a simmer"
-              empty="Nothing simmering."
-              testId="station-stove"
-              {...common}
-            />
-            <TimerStation
-              title="Jars"
-              icon={<Inventory2 fontSize="inherit" />}
-              timers={timers.filter((t) => t.kind === 'hot-hold')}
-              presets={jarPresets(day.loads)}
-              presetsTitle="Time the jars"
-              empty="Keep clean jars hot in simmering water until you fill them."
-              testId="station-jars"
-              {...common}
-            />
-            <CoolingSummary loads={day.loads} batches={day.batches} timers={timers} />
-          </Stack>
-        </Box>
-        <Typography sx={{ color: 'text.secondary', fontSize: '1rem' }}>
-          {CAUTIONS['hot-jars-steam'].title}. {CAUTIONS['local-guidance'].text}
-        </Typography>
-      </Stack>
-      <AlarmOverlay alarms={alarms} {...common} />
-    </LiveScreen>
+    <Profiler id="board" onRender={countCommits}>
+      <LiveScreen scheme={scheme} testId="counter-board">
+        <BoardBar
+          title={day.title}
+          backHref={links.plan}
+          backLabel="Back to the day plan"
+          scheme={scheme}
+          onToggleScheme={toggleScheme}
+          wakeLock={wakeLock}
+          onPhone={() => setPhones((p) => !p)}
+          phoneOpen={phones}
+        />
+        <Stack spacing={2} sx={{ p: { xs: 1.5, md: 2 } }}>
+          <ConnectionBanner />
+          {day.status === 'closed' ? (
+            <Typography sx={{ fontSize: '1.2rem' }}>This day is closed: the board is read-only.</Typography>
+          ) : null}
+          {phones ? (
+            <Suspense fallback={null}>
+              <PhoneJoinPanel
+                kitchenId={kitchen.id}
+                kitchenName={kitchen.name}
+                dayTitle={day.title}
+                pocketPath={links.pocket}
+                isLead={kitchen.role === 'lead'}
+              />
+            </Suspense>
+          ) : null}
+          <Box
+            sx={{
+              display: 'grid',
+              gap: 2,
+              gridTemplateColumns: { xs: '1fr', md: 'minmax(0, 2fr) minmax(0, 1fr)' },
+              alignItems: 'start',
+            }}
+          >
+            <Stack spacing={2}>
+              {day.loads.length === 0 ? (
+                <StationCard title="Canners" icon={<OutdoorGrill fontSize="inherit" />}>
+                  <Typography sx={{ fontSize: '1.3rem' }}>No loads yet.</Typography>
+                  <Link component={RouterLink} to={links.plan} sx={{ fontSize: '1.2rem' }}>
+                    Make a load on the day plan
+                  </Link>
+                </StationCard>
+              ) : (
+                cannerGroups(day.loads).map((c) => (
+                  <CannerStation
+                    key={c.cannerId}
+                    canner={c}
+                    timers={timers}
+                    batches={day.batches}
+                    planHref={links.plan}
+                    confirm={confirm}
+                    {...common}
+                  />
+                ))
+              )}
+              {day.batches.length > 0 ? (
+                <StationCard
+                  title="Batches"
+                  icon={<MenuBook fontSize="inherit" />}
+                  subtitle="Prep steps, batch by batch"
+                >
+                  {day.batches.map((b) => (
+                    <Box key={b.id} sx={{ borderTop: 1, borderColor: 'divider', pt: 2 }}>
+                      <Typography sx={{ fontSize: '1.3rem', fontWeight: 700, mb: 1 }}>{b.recipeName}</Typography>
+                      <StepGuide
+                        name={b.recipeName}
+                        steps={batchSteps(b, prepSteps(b.recipeId), day.loads.find((l) => l.batchId === b.id)?.plan)}
+                        who={{ subject: 'batch', id: b.id }}
+                        confirm={confirm}
+                        canCommand={canCommand}
+                        compact
+                      />
+                    </Box>
+                  ))}
+                </StationCard>
+              ) : null}
+            </Stack>
+            <Stack spacing={2}>
+              <TimerStation
+                title="Prep"
+                icon={<Countertops fontSize="inherit" />}
+                timers={timers.filter((t) => t.kind === 'blanch' || t.kind === 'custom')}
+                presets={prepPresets()}
+                presetsTitle="Start a blanch dip"
+                empty="Blanch dips for peeling: 30 to 60 seconds."
+                testId="station-prep"
+                {...common}
+              />
+              <TimerStation
+                title="Stove"
+                icon={<OutdoorGrill fontSize="inherit" />}
+                timers={timers.filter((t) => t.kind === 'simmer')}
+                presets={stovePresets(day.batches.flatMap((b) => prepSteps(b.recipeId) ?? []))}
+                presetsTitle="Start a simmer"
+                empty="Nothing simmering."
+                testId="station-stove"
+                {...common}
+              />
+              <TimerStation
+                title="Jars"
+                icon={<Inventory2 fontSize="inherit" />}
+                timers={timers.filter((t) => t.kind === 'hot-hold')}
+                presets={jarPresets(day.loads)}
+                presetsTitle="Time the jars"
+                empty="Keep clean jars hot in simmering water until you fill them."
+                testId="station-jars"
+                {...common}
+              />
+              <CoolingSummary loads={day.loads} batches={day.batches} timers={timers} />
+            </Stack>
+          </Box>
+          <Typography sx={{ color: 'text.secondary', fontSize: '1rem' }}>
+            {CAUTIONS['hot-jars-steam'].title}. {CAUTIONS['local-guidance'].text}
+          </Typography>
+        </Stack>
+        <AlarmOverlay alarms={alarms} {...common} />
+      </LiveScreen>
+    </Profiler>
   );
 }
