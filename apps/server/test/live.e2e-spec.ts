@@ -259,10 +259,15 @@ describe('lifting a load (e2e)', () => {
     const phone = await connectLive(t.url, crew.helper.token);
     await ok(phone, 'day:join', { dayId: day.id });
     const rest = { kind: 'cooling-rest', label: 'Load 1 cooling', loadId: load.id, startNow: true };
-    const started = await ok<TimerAnswer>(phone, 'timer:start', { commandId: randomUUID(), dayId: day.id, timer: rest });
+    const started = await ok<TimerAnswer>(phone, 'timer:start', {
+      commandId: randomUUID(),
+      dayId: day.id,
+      timer: rest,
+    });
     expect(started.timer.durationMs).toBe(12 * 3600_000); // USDA Guide: cool undisturbed 12 to 24 hours
     const lifted = await waitForEvent(phone, (e) => e.type === 'load.lifted');
-    const view = (await request(t.http).get(`/api/kitchens/${crew.kitchen.id}/days/${day.id}`).set(crew.lead.auth)).body as {
+    const view = (await request(t.http).get(`/api/kitchens/${crew.kitchen.id}/days/${day.id}`).set(crew.lead.auth))
+      .body as {
       loads: { id: string; liftedAt: string | null }[];
     };
     expect(view.loads[0]?.liftedAt).toBe(lifted.at);
