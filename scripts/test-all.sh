@@ -26,6 +26,7 @@ step 'format (prettier)' npx prettier --check . --log-level warn
 step 'lint (eslint)' npx eslint . --max-warnings 0
 step 'types (tsc)' npm run -s check
 step 'migrations match the schema' bash scripts/db-check.sh
+step 'alarm sounds match their script' node scripts/make-sounds.mjs --check
 step 'build' npm run -s build
 step 'unit, service, server e2e and web tests (vitest)' \
   npx vitest run --reporter=default --reporter=json --outputFile.json="$reports/vitest.json"
