@@ -13,6 +13,12 @@ interface Stored<T> {
   answer: Ack<T>;
 }
 
+interface Queued {
+  run: () => { answer: Ack<unknown>; events: JournalEvent[] };
+  resolve: (value: { answer: Ack<unknown>; events: JournalEvent[] }) => void;
+  reject: (error: unknown) => void;
+}
+
 /**
  * Makes a device's command act once per command id: a retry or a doubled tap gets the first answer again; the same
  * id for a different command is refused. The ledger row is written in the command's own transaction.
@@ -40,8 +46,58 @@ export class CommandLedger {
       .prepare();
   }
 
-  /** Runs `act` in one transaction with its ledger row; the caller publishes the events after the commit. */
+  private queue: Queued[] = [];
+
+  /**
+   * Runs `act` with its ledger row, and answers once that is committed; the caller publishes the events then.
+   * Commands that arrive in the same turn of the event loop share one commit (group commit): each runs in its own
+   * savepoint, so one failing rolls back only itself, and their journal numbers follow their arrival.
+   */
   once<T>(
+    event: string,
+    dayId: string,
+    commandId: string,
+    userId: string,
+    payload: object,
+    act: () => CommandOutcome<T>,
+  ): Promise<{ answer: Ack<T>; events: JournalEvent[] }> {
+    return new Promise((resolve, reject) => {
+      if (this.queue.length === 0) setImmediate(() => this.flush());
+      this.queue.push({
+        run: () => this.onceNow(event, dayId, commandId, userId, payload, act),
+        resolve: resolve as Queued['resolve'],
+        reject,
+      });
+    });
+  }
+
+  private flush(): void {
+    const batch = this.queue;
+    this.queue = [];
+    const results: ({ ok: true; value: ReturnType<Queued['run']> } | { ok: false; error: unknown })[] = [];
+    try {
+      this.db.$client.transaction(() => {
+        for (const item of batch) {
+          try {
+            results.push({ ok: true, value: item.run() });
+          } catch (error) {
+            results.push({ ok: false, error });
+          }
+        }
+      })();
+    } catch (error) {
+      for (const item of batch) item.reject(error);
+      return;
+    }
+    batch.forEach((item, i) => {
+      const r = results[i]!;
+      if (r.ok) item.resolve(r.value);
+      else item.reject(r.error);
+    });
+  }
+
+  /** One command in its own (nested: a savepoint inside a group commit) transaction. */
+  onceNow<T>(
     event: string,
     dayId: string,
     commandId: string,

@@ -85,7 +85,7 @@ export class LiveDaysService {
     return { data: { dayId } };
   }
 
-  start(session: SocketSession, dayId: string, commandId: string, timer: NewTimer): Ack<TimerAnswer> {
+  async start(session: SocketSession, dayId: string, commandId: string, timer: NewTimer): Promise<Ack<TimerAnswer>> {
     const actor = this.actor(session, dayId);
     if ('error' in actor) return actor;
     // A process timer belongs to a load and is made with it, from the plan: a device cannot bring its own minutes.
@@ -122,20 +122,23 @@ export class LiveDaysService {
     ];
   }
 
-  command(
+  async command(
     session: SocketSession,
     dayId: string,
     commandId: string,
     timerId: string,
     command: TimerCommand,
-  ): Ack<TimerAnswer> {
+  ): Promise<Ack<TimerAnswer>> {
     const actor = this.actor(session, dayId);
     if ('error' in actor) return actor;
     return this.timers.command(dayId, commandId, timerId, command, actor);
   }
 
   /** A tick in the step guide, for a batch or a load of this day; a journal entry like every other change. */
-  confirmStep(session: SocketSession, p: StepConfirmPayload & { done: boolean }): Ack<{ mark: StepMark }> {
+  async confirmStep(
+    session: SocketSession,
+    p: StepConfirmPayload & { done: boolean },
+  ): Promise<Ack<{ mark: StepMark }>> {
     const actor = this.actor(session, p.dayId);
     if ('error' in actor) return actor;
     if (actor.role === 'watcher') {
@@ -143,7 +146,7 @@ export class LiveDaysService {
         error: { code: 'forbidden', message: 'Watchers follow the board; only a lead or a helper ticks steps.' },
       };
     }
-    const { answer, events } = this.ledger.once<{ mark: StepMark }>(
+    const { answer, events } = await this.ledger.once<{ mark: StepMark }>(
       'step:confirm',
       p.dayId,
       p.commandId,

@@ -88,36 +88,36 @@ export class LiveGateway implements OnGatewayInit, OnGatewayConnection {
   }
 
   @SubscribeMessage('day:join')
-  join(@ConnectedSocket() socket: LiveSocket, @MessageBody() body: unknown): Ack<DayJoined> {
+  join(@ConnectedSocket() socket: LiveSocket, @MessageBody() body: unknown): Promise<Ack<DayJoined>> {
     return this.handle(socket, 'day:join', body, (p) => this.live.join(socket, p.dayId, p.sinceSeq));
   }
 
   @SubscribeMessage('day:leave')
-  leave(@ConnectedSocket() socket: LiveSocket, @MessageBody() body: unknown): Ack<{ dayId: string }> {
+  leave(@ConnectedSocket() socket: LiveSocket, @MessageBody() body: unknown): Promise<Ack<{ dayId: string }>> {
     return this.handle(socket, 'day:leave', body, (p) => this.live.leave(socket, p.dayId));
   }
 
   @SubscribeMessage('timer:start')
-  start(@ConnectedSocket() socket: LiveSocket, @MessageBody() body: unknown): Ack<TimerAnswer> {
+  start(@ConnectedSocket() socket: LiveSocket, @MessageBody() body: unknown): Promise<Ack<TimerAnswer>> {
     return this.handle(socket, 'timer:start', body, (p) => this.live.start(socket.data, p.dayId, p.commandId, p.timer));
   }
 
   @SubscribeMessage('timer:command')
-  command(@ConnectedSocket() socket: LiveSocket, @MessageBody() body: unknown): Ack<TimerAnswer> {
+  command(@ConnectedSocket() socket: LiveSocket, @MessageBody() body: unknown): Promise<Ack<TimerAnswer>> {
     return this.handle(socket, 'timer:command', body, (p) =>
       this.live.command(socket.data, p.dayId, p.commandId, p.timerId, p.command),
     );
   }
 
   @SubscribeMessage('alarm:ack')
-  acknowledge(@ConnectedSocket() socket: LiveSocket, @MessageBody() body: unknown): Ack<TimerAnswer> {
+  acknowledge(@ConnectedSocket() socket: LiveSocket, @MessageBody() body: unknown): Promise<Ack<TimerAnswer>> {
     return this.handle(socket, 'alarm:ack', body, (p) =>
       this.live.command(socket.data, p.dayId, p.commandId, p.timerId, { type: 'acknowledge' }),
     );
   }
 
   @SubscribeMessage('step:confirm')
-  confirmStep(@ConnectedSocket() socket: LiveSocket, @MessageBody() body: unknown): Ack<{ mark: StepMark }> {
+  confirmStep(@ConnectedSocket() socket: LiveSocket, @MessageBody() body: unknown): Promise<Ack<{ mark: StepMark }>> {
     return this.handle(socket, 'step:confirm', body, (p) => this.live.confirmStep(socket.data, p));
   }
 
@@ -145,12 +145,12 @@ export class LiveGateway implements OnGatewayInit, OnGatewayConnection {
     return { data: { expiresAt: verified.expiresAt } };
   }
 
-  private handle<E extends ClientEventName, T>(
+  private async handle<E extends ClientEventName, T>(
     socket: LiveSocket,
     event: E,
     body: unknown,
-    act: (payload: Payload<E>) => Ack<T>,
-  ): Ack<T> {
+    act: (payload: Payload<E>) => Ack<T> | Promise<Ack<T>>,
+  ): Promise<Ack<T>> {
     if (Date.now() >= socket.data.expiresAt) {
       socket.emit('session:expired', { message: 'Your sign-in ran out: renew it to go on' });
       return { error: { code: 'unauthorized', message: 'Your sign-in ran out: renew it to go on' } };
@@ -158,7 +158,7 @@ export class LiveGateway implements OnGatewayInit, OnGatewayConnection {
     const parsed = CLIENT_EVENT_SCHEMAS[event].safeParse(body);
     if (!parsed.success) return invalid(parsed.error);
     try {
-      return act(parsed.data as Payload<E>);
+      return await act(parsed.data as Payload<E>);
     } catch (error) {
       this.logger.error(`${event} failed: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}`);
       return { error: { code: 'internal', message: 'Something went wrong on the server. It has been logged.' } };

@@ -83,7 +83,7 @@ export class TimersService implements OnApplicationBootstrap {
     input: NewTimer,
     actor: LiveActor,
     alongside?: (now: number) => { error: LiveError } | JournalEvent[],
-  ): Ack<TimerAnswer> {
+  ): Promise<Ack<TimerAnswer>> {
     return this.once('timer:start', dayId, commandId, { input }, actor, () => {
       if (this.timers.dayStatus(dayId) !== 'open') return { error: closedDay() };
       const now = Date.now();
@@ -134,7 +134,7 @@ export class TimersService implements OnApplicationBootstrap {
     timerId: string,
     command: TimerCommand,
     actor: LiveActor,
-  ): Ack<TimerAnswer> {
+  ): Promise<Ack<TimerAnswer>> {
     return this.once('timer:command', dayId, commandId, { timerId, command }, actor, () => {
       if (this.timers.dayStatus(dayId) !== 'open') return { error: closedDay() };
       const timer = this.timers.find(dayId, timerId);
@@ -176,15 +176,15 @@ export class TimersService implements OnApplicationBootstrap {
     for (const timer of touched.values()) this.scheduler.schedule(timer.id, timer.deadlineAt);
   }
 
-  private once(
+  private async once(
     event: string,
     dayId: string,
     commandId: string,
     payload: object,
     actor: LiveActor,
     act: () => CommandOutcome<TimerAnswer>,
-  ): Ack<TimerAnswer> {
-    const { answer, events } = this.ledger.once(event, dayId, commandId, actor.userId, payload, act);
+  ): Promise<Ack<TimerAnswer>> {
+    const { answer, events } = await this.ledger.once(event, dayId, commandId, actor.userId, payload, act);
     this.publish(events);
     return answer;
   }
