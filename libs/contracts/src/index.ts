@@ -5,3 +5,4 @@ export * from './kitchens.js';
 export * from './recipes.js';
 export * from './live.js';
 export * from './days.js';
+export * from './after-canner.js';

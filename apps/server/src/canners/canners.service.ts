@@ -26,7 +26,14 @@ export class CannersService {
   }
 
   create(kitchenId: string, input: CannerInput, now = new Date()): CannerView {
-    const row: CannerRow = { id: randomUUID(), kitchenId, createdAt: now, ...input };
+    const row: CannerRow = {
+      id: randomUUID(),
+      kitchenId,
+      createdAt: now,
+      waterLitres: null,
+      burnerWatts: null,
+      ...input,
+    };
     this.repo.insert(row);
     return toView(row);
   }

@@ -207,6 +207,10 @@ export class DaysService {
         number: this.days.nextLoadNumber(dayId),
         plan: result.plan,
         liftedAt: null,
+        reprocessOf: null,
+        bandsOffAt: null,
+        bandsOffBy: null,
+        bandsOffOverride: null,
         createdAt: now,
       };
       this.days.insertLoad(load);

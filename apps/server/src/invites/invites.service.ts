@@ -87,7 +87,7 @@ export class InvitesService {
       if (!invite) throw inviteNotFound();
       if (this.kitchensRepo.findMembership(invite.kitchenId, userId)) return invite.kitchenId;
       if (!this.invites.markRedeemed(invite.id, userId, now)) throw inviteNotFound();
-      this.kitchensRepo.insertMembership({ kitchenId: invite.kitchenId, userId, role: invite.role, joinedAt: now });
+      this.kitchensRepo.insertMembership({ kitchenId: invite.kitchenId, userId, role: invite.role, reminders: true, joinedAt: now });
       return invite.kitchenId;
     });
     return this.kitchens.get(kitchenId, userId);

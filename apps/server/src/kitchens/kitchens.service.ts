@@ -43,7 +43,7 @@ export class KitchensService {
         units: input.units,
         createdAt: now,
       });
-      this.repo.insertMembership({ kitchenId: id, userId, role: 'lead', joinedAt: now });
+      this.repo.insertMembership({ kitchenId: id, userId, role: 'lead', reminders: true, joinedAt: now });
     });
     return this.get(id, userId);
   }

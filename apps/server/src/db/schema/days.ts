@@ -64,9 +64,19 @@ export const loads = sqliteTable(
     number: integer('number').notNull(),
     plan: text('plan', { mode: 'json' }).$type<ProcessPlan>().notNull(),
     liftedAt: integer('lifted_at', { mode: 'timestamp_ms' }),
+    /** A reprocessing load points at the load whose unsealed jars it carries again (new lids, the full time). */
+    reprocessOf: text('reprocess_of'),
+    /** When the bands came off, who took them off, and the lead's written reason if it was before 12 h. */
+    bandsOffAt: integer('bands_off_at', { mode: 'timestamp_ms' }),
+    bandsOffBy: text('bands_off_by'),
+    bandsOffOverride: text('bands_off_override'),
     createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull(),
   },
-  (t) => [index('loads_day_idx').on(t.dayId), uniqueIndex('loads_day_number_idx').on(t.dayId, t.number)],
+  (t) => [
+    index('loads_day_idx').on(t.dayId),
+    uniqueIndex('loads_day_number_idx').on(t.dayId, t.number),
+    index('loads_reprocess_of_idx').on(t.reprocessOf),
+  ],
 );
 
 /** Live timers: the timer document as JSON, and its next deadline as a column so a restart can re-arm them. */

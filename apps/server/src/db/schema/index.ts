@@ -1,3 +1,4 @@
 export * from './kitchens.js';
 export * from './users.js';
 export * from './days.js';
+export * from './after-canner.js';

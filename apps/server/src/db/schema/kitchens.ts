@@ -23,6 +23,8 @@ export const memberships = sqliteTable(
       .notNull()
       .references(() => users.id, { onDelete: 'cascade' }),
     role: text('role').$type<Role>().notNull(),
+    /** E-mail reminders (bands may come off, a reprocess deadline nears); each member can turn them off. */
+    reminders: integer('reminders', { mode: 'boolean' }).notNull().default(true),
     joinedAt: integer('joined_at', { mode: 'timestamp_ms' }).notNull(),
   },
   (t) => [primaryKey({ columns: [t.kitchenId, t.userId] }), index('memberships_user_idx').on(t.userId)],
@@ -61,6 +63,9 @@ export const canners = sqliteTable(
     method: text('method').$type<CanningMethod>().notNull(),
     gauge: text('gauge').$type<GaugeType>(),
     capacity: text('capacity', { mode: 'json' }).$type<Partial<Record<JarSize, number>>>().notNull(),
+    /** For the physics estimate of the come-up time when the kitchen has no logged come-ups yet. */
+    waterLitres: real('water_litres'),
+    burnerWatts: integer('burner_watts'),
     createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull(),
   },
   (t) => [index('canners_kitchen_idx').on(t.kitchenId)],
