@@ -10,6 +10,7 @@ import { validateConfig } from '../apps/server/src/config/config.schema.js';
 import { openDatabase, type Db } from '../apps/server/src/db/database.js';
 import { canners, kitchens, memberships, recipes, users } from '../apps/server/src/db/schema/index.js';
 import { findStarter } from '../apps/server/src/recipes/starter-recipes.js';
+import { crewOf, loadHistory } from './history.js';
 import { type Seed, seedSchema } from './seed-schema.js';
 
 export const DEMO_SEED_FILE = fileURLToPath(new URL('./demo-kitchen.json', import.meta.url));
@@ -67,6 +68,8 @@ export async function loadSeed(db: Db, seed: Seed, now = new Date()): Promise<bo
         })
         .run();
     }
+    // Past days come last: they need the people, canners and recipes above.
+    loadHistory(db, kitchenId, seed.history, crewOf(people), now.getTime());
   });
   return true;
 }

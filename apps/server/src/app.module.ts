@@ -10,10 +10,17 @@ import { DatabaseModule } from './db/database.module.js';
 import { HealthModule } from './health/health.module.js';
 import { InvitesModule } from './invites/invites.module.js';
 import { DaysModule } from './days/days.module.js';
+import { CoolingModule } from './cooling/cooling.module.js';
+import { PantryModule } from './pantry/pantry.module.js';
+import { PlannerModule } from './planner/planner.module.js';
 import { JournalModule } from './journal/journal.module.js';
 import { KitchensModule } from './kitchens/kitchens.module.js';
 import { LiveModule } from './live/live.module.js';
+import { MailModule } from './mail/mail.module.js';
 import { RecipesModule } from './recipes/recipes.module.js';
+import { RemindersModule } from './reminders/reminders.module.js';
+import { LabelsModule } from './labels/labels.module.js';
+import { UploadsModule } from './uploads/uploads.module.js';
 
 /** apps/web/dist, the same depth from src/ and dist/. */
 const DEFAULT_WEB_DIST = fileURLToPath(new URL('../../web/dist', import.meta.url));
@@ -32,6 +39,7 @@ export class AppModule {
       imports: [
         ConfigModule.forRoot(env),
         DatabaseModule,
+        MailModule,
         AuthModule,
         KitchensModule,
         InvitesModule,
@@ -39,8 +47,14 @@ export class AppModule {
         RecipesModule,
         JournalModule,
         DaysModule,
+        CoolingModule,
+        PantryModule,
+        PlannerModule,
         LiveModule,
         HealthModule,
+        RemindersModule,
+        UploadsModule,
+        LabelsModule,
         ...(hasWeb
           ? [
               ServeStaticModule.forRoot({

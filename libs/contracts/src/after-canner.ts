@@ -1,6 +1,7 @@
 import { calendarDateSchema, type CanningMethod, type JarSize } from '@jarday/rules';
 import { z } from 'zod';
-import { idSchema } from './kitchens.js';
+import type { LoadView } from './days.js';
+import { idSchema, type Role } from './kitchens.js';
 
 /* ---------- cooling shelf and seal checks ---------- */
 
@@ -71,6 +72,17 @@ export type SealCheckInput = z.input<typeof sealCheckSchema>;
 export const reprocessSchema = z.strictObject({ cannerId: idSchema });
 export type ReprocessInput = z.input<typeof reprocessSchema>;
 
+/**
+ * A reprocessing load: the jars marked "reprocess" (jar k of the new load is the k-th of them by jar number), with
+ * the full process time. `dayReopened` when the day had been closed: the jars need their live timer.
+ */
+export interface ReprocessAnswer {
+  load: LoadView;
+  original: CoolingLoadView;
+  jarNumbers: number[];
+  dayReopened: boolean;
+}
+
 export interface SealCheckView {
   jarNumber: number;
   result: SealResult;
@@ -100,6 +112,8 @@ export interface CoolingLoadView {
   /** The load that carried this load's unsealed jars again, if any. */
   reprocessedBy: string | null;
   sealChecks: SealCheckView[];
+  /** The pantry lot of the load's batch, made with the batch's first seal check. */
+  lot: { id: string; code: string } | null;
 }
 
 export interface SealRate {
@@ -109,10 +123,25 @@ export interface SealRate {
   rate: number | null;
 }
 
+/** A canning day with loads on the shelf, and its seal rate so far. */
+export interface CoolingDayView {
+  dayId: string;
+  date: string;
+  title: string;
+  status: 'open' | 'closed';
+  sealRate: SealRate;
+}
+
 export interface CoolingShelfView {
   serverTime: string;
   loads: CoolingLoadView[];
+  /** The days of the loads shown (or the one asked for), newest first. */
+  days: CoolingDayView[];
 }
+
+/** `?dayId=`: every lifted load of that day, however old; without it the shelf of the last few days. */
+export const coolingQuerySchema = z.strictObject({ dayId: idSchema.optional() });
+export type CoolingQuery = z.input<typeof coolingQuerySchema>;
 
 /* ---------- pantry ---------- */
 
@@ -171,6 +200,33 @@ export interface LotView {
   entries: LotEntryView[];
 }
 
+/** `?dayId=`: only the lots of that canning day. */
+export const lotsQuerySchema = z.strictObject({ dayId: idSchema.optional() });
+export type LotsQuery = z.input<typeof lotsQuerySchema>;
+
+/** Jars on the shelf across every lot of the kitchen, by jar size. */
+export interface PantrySummaryView {
+  bySize: { jarSize: JarSize; onShelf: number; lots: number }[];
+  onShelf: number;
+  lots: number;
+  flaggedLots: number;
+}
+
+/** A caution as the server sends it, with the published source it rests on. */
+export interface CautionView {
+  id: string;
+  title: string;
+  text: string;
+  source: string;
+}
+
+/** The answer to a new lot entry: the lot as it now stands, and the caution to show when the lot is flagged. */
+export interface LotEntryAnswer {
+  lot: LotView;
+  entry: LotEntryView;
+  caution: CautionView | null;
+}
+
 /* ---------- labels and the jar record ---------- */
 
 export const LABEL_SHEETS = ['letter-rect-2x4', 'letter-round-2in', 'a4-rect-63x38'] as const;
@@ -226,6 +282,8 @@ export interface AttachmentView {
   width: number | null;
   height: number | null;
   hasThumb: boolean;
+  /** Who added it (null once that account is gone): they and the leads may remove it. */
+  uploadedById: string | null;
   uploadedByName: string | null;
   createdAt: string;
 }
@@ -237,3 +295,22 @@ export type ReminderKind = (typeof REMINDER_KINDS)[number];
 
 export const updateMyMembershipSchema = z.strictObject({ reminders: z.boolean({ error: 'On or off' }) });
 export type UpdateMyMembershipInput = z.input<typeof updateMyMembershipSchema>;
+
+/** One message the development and demo mail catcher received (GET /api/dev/mail, newest first). */
+export interface CaughtMailView {
+  to: string[];
+  subject: string;
+  text: string;
+  /** The http(s) addresses in the text, in order. */
+  links: string[];
+  at: string;
+}
+
+/** The signed-in person's own membership of a kitchen (GET and PATCH /api/kitchens/:kitchenId/members/me). */
+export interface MyMembershipView {
+  kitchenId: string;
+  userId: string;
+  role: Role;
+  /** E-mail reminders about this kitchen's loads (bands may come off, a reprocess deadline nears). */
+  reminders: boolean;
+}

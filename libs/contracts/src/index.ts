@@ -6,3 +6,5 @@ export * from './recipes.js';
 export * from './live.js';
 export * from './days.js';
 export * from './after-canner.js';
+export * from './planner.js';
+export * from './journal-review.js';

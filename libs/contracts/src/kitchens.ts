@@ -1,6 +1,7 @@
 import { altitudeSchema, canningMethodSchema, gaugeTypeSchema, jarSizeSchema, unitSystemSchema } from '@jarday/rules';
 import type { Altitude, CanningMethod, GaugeType, JarSize, UnitSystem } from '@jarday/rules';
 import { z } from 'zod';
+import { emailSchema } from './auth.js';
 
 export const ROLES = ['lead', 'helper', 'watcher'] as const;
 export const roleSchema = z.enum(ROLES);
@@ -58,6 +59,8 @@ export const createInviteSchema = z.strictObject({
   role: roleSchema.exclude(['lead']).default('helper'),
   /** Days until the invite stops working. */
   expiresInDays: z.number().int().min(1).max(30).default(7),
+  /** Where to e-mail the link; leave it out to share the code by hand. */
+  email: emailSchema.optional(),
 });
 export type CreateInviteInput = z.input<typeof createInviteSchema>;
 
@@ -80,6 +83,12 @@ export interface InviteView {
   createdByName: string;
 }
 
+/** The answer to creating an invite: the invite, and where its link is being e-mailed. */
+export interface CreatedInviteView extends InviteView {
+  /** The address the link is on its way to; null when none was given or this server sends no mail. */
+  emailedTo: string | null;
+}
+
 export interface InvitePreview {
   kitchenId: string;
   kitchenName: string;
@@ -100,6 +109,21 @@ const cannerFields = {
   method: canningMethodSchema,
   gauge: gaugeTypeSchema.nullable().default(null),
   capacity: cannerCapacitySchema,
+  /** For the planner's come-up estimate when the canner has no logged days yet: water it holds with a load in. */
+  waterLitres: z
+    .number({ error: 'Water must be a number of litres' })
+    .min(1, 'At least 1 L')
+    .max(100, 'At most 100 L')
+    .nullable()
+    .default(null),
+  /** The rated power of the burner or element it sits on, in watts. */
+  burnerWatts: z
+    .number({ error: 'Burner power must be a number of watts' })
+    .int('Whole watts')
+    .min(100, 'At least 100 W')
+    .max(10_000, 'At most 10,000 W')
+    .nullable()
+    .default(null),
 };
 
 const gaugeMatchesMethod = (c: { method: CanningMethod; gauge: GaugeType | null }) =>
@@ -123,5 +147,7 @@ export interface CannerView {
   method: CanningMethod;
   gauge: GaugeType | null;
   capacity: Partial<Record<JarSize, number>>;
+  waterLitres: number | null;
+  burnerWatts: number | null;
   createdAt: string;
 }

@@ -9,3 +9,4 @@ export { checkMinimum } from './minimum-gate.js';
 export { dueTimers, fireDue, nextDeadline, remainingMs, settle } from './schedule.js';
 export * from './idempotency.js';
 export * from './clock-sync.js';
+export * from './day-summary.js';

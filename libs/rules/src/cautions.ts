@@ -15,6 +15,8 @@ export const CAUTION_IDS = [
   'dial-gauge-check',
   'no-oven',
   'local-guidance',
+  'unsealed-jar',
+  'spoiled-lot',
 ] as const;
 export type CautionId = (typeof CAUTION_IDS)[number];
 
@@ -22,7 +24,14 @@ export interface Caution {
   id: CautionId;
   title: string;
   text: string;
+  /** The published guidance the caution rests on, for cautions shown on their own (a refusal, a report). */
+  source?: string;
 }
+
+/** Where the spoilage and unsealed-jar cautions come from: shown with them so a person can read the original. */
+export const SPOILAGE_SOURCE =
+  'USDA Complete Guide to Home Canning, Guide 1, "Identifying and handling spoiled canned food" (NCHFP)';
+export const UNSEALED_SOURCE = 'USDA Complete Guide to Home Canning, Guide 1 (1994; NCHFP)';
 
 export const CAUTIONS: Record<CautionId, Caution> = {
   // USDA Guide 1: only tested recipes, processes and times are recommended.
@@ -95,6 +104,28 @@ export const CAUTIONS: Record<CautionId, Caution> = {
     text:
       'Jarday follows published home-canning guidance; it does not replace it. Follow your local extension ' +
       'service, and for food you sell, local food codes and licensed practice.',
+  },
+  // USDA Guide 1 (1994): an unsealed jar is refrigerated, or reprocessed within 24 hours with a new lid.
+  'unsealed-jar': {
+    id: 'unsealed-jar',
+    title: 'A jar that did not seal',
+    text:
+      'Put it in the fridge and eat it within a few days, or reprocess it within 24 hours of lifting: a new ' +
+      'lid, a clean rim, and the full process time again. After 24 hours, refrigerate it. Never store it on ' +
+      'the shelf.',
+    source: UNSEALED_SOURCE,
+  },
+  // USDA Guide 1, identifying and handling spoiled canned food; botulism.
+  'spoiled-lot': {
+    id: 'spoiled-lot',
+    title: 'Spoilage reported: do not taste',
+    text:
+      'Do not taste the food, not even a little: spoiled food can carry botulism toxin, which can kill. ' +
+      'Dispose of it as extension guidance says: sealed suspect jars go double-bagged into the trash; ' +
+      'leaking or unsealed ones are detoxified first by boiling them 30 minutes in water 1 inch above the jars. ' +
+      'Look carefully at every other jar of this lot (bulging lid, leaks, spurting liquid, rising bubbles, odd ' +
+      'colour or smell, mould) before opening one, and ask your local extension service when in doubt.',
+    source: SPOILAGE_SOURCE,
   },
 };
 

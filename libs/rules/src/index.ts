@@ -14,3 +14,5 @@ export * from './plan.js';
 export * from './boiling-point.js';
 export * from './yields.js';
 export * from './after-canner.js';
+export * from './come-up.js';
+export * from './day-plan.js';

@@ -26,7 +26,11 @@ export class CannersRepository {
     this.db.insert(canners).values(row).run();
   }
 
-  update(kitchenId: string, id: string, patch: Pick<CannerRow, 'name' | 'method' | 'gauge' | 'capacity'>): boolean {
+  update(
+    kitchenId: string,
+    id: string,
+    patch: Pick<CannerRow, 'name' | 'method' | 'gauge' | 'capacity' | 'waterLitres' | 'burnerWatts'>,
+  ): boolean {
     return (
       this.db
         .update(canners)

@@ -14,6 +14,8 @@ const toView = (c: CannerRow): CannerView => ({
   method: c.method,
   gauge: c.gauge,
   capacity: c.capacity,
+  waterLitres: c.waterLitres,
+  burnerWatts: c.burnerWatts,
   createdAt: c.createdAt.toISOString(),
 });
 
@@ -30,8 +32,6 @@ export class CannersService {
       id: randomUUID(),
       kitchenId,
       createdAt: now,
-      waterLitres: null,
-      burnerWatts: null,
       ...input,
     };
     this.repo.insert(row);

@@ -5,7 +5,6 @@ import {
   createLoadSchema,
   type DaySummaryView,
   type DayView,
-  deviceIdSchema,
   idSchema,
   listDaysQuerySchema,
   type LoadView,
@@ -17,15 +16,8 @@ import { type AuthUser, CurrentUser } from '../auth/auth.decorators.js';
 import { ApiZodBody } from '../common/openapi.js';
 import { AnyMember, CurrentMembership, KitchenRoles } from '../kitchens/kitchen-role.guard.js';
 import type { MembershipRow } from '../kitchens/kitchens.repository.js';
-import { type Actor, DaysService } from './days.service.js';
-
-/** REST callers may name their device (the same id the socket uses) so the journal can say where a change came from. */
-const actorOf = (user: AuthUser, member: MembershipRow, device: string | undefined): Actor => ({
-  userId: user.id,
-  name: user.name,
-  role: member.role,
-  deviceId: deviceIdSchema.safeParse(device).data ?? null,
-});
+import { actorOf } from './actor.js';
+import { DaysService } from './days.service.js';
 
 @ApiTags('days')
 @ApiBearerAuth()

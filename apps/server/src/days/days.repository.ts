@@ -61,6 +61,17 @@ export class DaysRepository {
     );
   }
 
+  /** Opens a closed day again; false when it was open already. */
+  reopenDay(dayId: string): boolean {
+    return (
+      this.db
+        .update(days)
+        .set({ status: 'open', closedAt: null })
+        .where(and(eq(days.id, dayId), eq(days.status, 'closed')))
+        .run().changes === 1
+    );
+  }
+
   insertBatch(row: BatchRow): void {
     this.db.insert(batches).values(row).run();
   }
@@ -74,7 +85,13 @@ export class DaysRepository {
   }
 
   listBatches(dayId: string): BatchRow[] {
-    return this.db.select().from(batches).where(eq(batches.dayId, dayId)).orderBy(asc(batches.createdAt)).all();
+    // rowid breaks ties between batches added in the same millisecond: the order they were added gives their letters.
+    return this.db
+      .select()
+      .from(batches)
+      .where(eq(batches.dayId, dayId))
+      .orderBy(asc(batches.createdAt), sql`rowid`)
+      .all();
   }
 
   /** Loads are numbered 1, 2, 3... within a day; call inside the transaction that inserts the load. */

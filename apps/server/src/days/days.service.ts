@@ -12,10 +12,10 @@ import {
   type Role,
   rulesOf,
 } from '@jarday/contracts';
-import { JAR_SIZE_LABELS, jarsFromProduce, planProcess } from '@jarday/rules';
+import { JAR_SIZE_LABELS, jarsFromProduce, planProcess, type ProcessPlan } from '@jarday/rules';
 import { Injectable } from '@nestjs/common';
 import type { z } from 'zod';
-import { CannersRepository } from '../canners/canners.repository.js';
+import { type CannerRow, CannersRepository } from '../canners/canners.repository.js';
 import { AppError, notFound } from '../common/app-error.js';
 import { JournalRepository } from '../journal/journal.repository.js';
 import { KitchensRepository } from '../kitchens/kitchens.repository.js';
@@ -23,50 +23,15 @@ import { LivePublisher } from '../realtime/live-publisher.js';
 import { RecipesService } from '../recipes/recipes.service.js';
 import { TimersService } from '../timers/timers.service.js';
 import { type BatchRow, type DayRow, DaysRepository, type LoadRow } from './days.repository.js';
+import { toBatchView, toLoadView, toSummary } from './day-views.js';
+
+export { toLoadView } from './day-views.js';
 
 /** Who did something, from where: the journal keeps both. */
 export interface Actor extends JournalActor {
   deviceId: string | null;
   role: Role;
 }
-
-const toBatchView = (b: BatchRow): BatchView => ({
-  id: b.id,
-  dayId: b.dayId,
-  recipeId: b.recipeId,
-  recipeName: b.recipe.name,
-  tested: b.recipe.tested,
-  jarSize: b.jarSize,
-  pack: b.pack,
-  jars: b.jars,
-  createdAt: b.createdAt.toISOString(),
-});
-
-export const toLoadView = (l: LoadRow): LoadView => ({
-  id: l.id,
-  dayId: l.dayId,
-  batchId: l.batchId,
-  number: l.number,
-  cannerId: l.cannerId,
-  cannerName: l.cannerName,
-  method: l.method,
-  jars: l.jars,
-  plan: l.plan,
-  liftedAt: l.liftedAt?.toISOString() ?? null,
-  createdAt: l.createdAt.toISOString(),
-});
-
-const toSummary = (d: DayRow, counts: { batchCount: number; loadCount: number }): DaySummaryView => ({
-  id: d.id,
-  kitchenId: d.kitchenId,
-  date: d.date,
-  title: d.title,
-  status: d.status,
-  altitude: { value: d.altitudeValue, unit: d.altitudeUnit },
-  createdAt: d.createdAt.toISOString(),
-  closedAt: d.closedAt?.toISOString() ?? null,
-  ...counts,
-});
 
 @Injectable()
 export class DaysService {
@@ -180,6 +145,19 @@ export class DaysService {
     if (!batch) throw notFound('Batch');
     const canner = this.canners.find(kitchenId, input.cannerId);
     if (!canner) throw notFound('Canner');
+    const plan = this.planLoad(day, batch, canner, input.jars);
+    const { row, events } = this.days.transaction(() =>
+      this.insertLoadInTransaction({ day, batch, canner, jars: input.jars, plan, actor, now }),
+    );
+    this.timers.publish(events);
+    return toLoadView(row);
+  }
+
+  /**
+   * The full process plan for jars of a batch in a canner at the day's altitude, or the rules' refusal; also
+   * refused when the canner cannot hold that many jars of the batch's size.
+   */
+  planLoad(day: DayRow, batch: BatchRow, canner: CannerRow, jars: number): ProcessPlan {
     const result = planProcess({
       recipe: rulesOf(batch.recipe),
       jarSize: batch.jarSize,
@@ -189,48 +167,78 @@ export class DaysService {
     });
     if (!result.ok) throw new AppError('plan_refused', result.reason.message);
     const capacity = canner.capacity[batch.jarSize] ?? 0;
-    if (input.jars > capacity) {
+    if (jars > capacity) {
       throw new AppError(
         'load_too_big',
-        `${canner.name} holds ${capacity} ${JAR_SIZE_LABELS[batch.jarSize].toLowerCase()} jars at a time, not ${input.jars}`,
+        `${canner.name} holds ${capacity} ${JAR_SIZE_LABELS[batch.jarSize].toLowerCase()} jars at a time, not ${jars}`,
       );
     }
-    const { row, events } = this.days.transaction(() => {
-      const load: LoadRow = {
-        id: randomUUID(),
-        dayId,
-        batchId: batch.id,
-        cannerId: canner.id,
-        cannerName: canner.name,
-        method: canner.method,
-        jars: input.jars,
-        number: this.days.nextLoadNumber(dayId),
-        plan: result.plan,
-        liftedAt: null,
-        reprocessOf: null,
-        bandsOffAt: null,
-        bandsOffBy: null,
-        bandsOffOverride: null,
-        createdAt: now,
-      };
-      this.days.insertLoad(load);
-      const created = this.record(dayId, actor, now, 'load.created', { load: toLoadView(load) });
-      // The load's process timer takes its tested minutes from the plan, never from a device.
-      const processTimer = this.timers.createInTransaction(
-        dayId,
-        {
-          kind: load.method === 'pressure' ? 'pressure-process' : 'process',
-          label: `Load ${load.number}: ${batch.recipe.name}`.slice(0, 80),
-          testedMs: result.plan.minutes * 60_000,
-          loadId: load.id,
-        },
-        actor,
-        now.getTime(),
-      );
-      return { row: load, events: [created, ...processTimer.events] };
+    return result.plan;
+  }
+
+  /**
+   * Inserts a planned load with its `load.created` entry and its process timer; call inside the caller's
+   * transaction and hand the returned events to `TimersService.publish` after the commit (it also arms the timer).
+   * A reprocessing load names the load whose jars it carries again.
+   */
+  insertLoadInTransaction(args: {
+    day: DayRow;
+    batch: BatchRow;
+    canner: CannerRow;
+    jars: number;
+    plan: ProcessPlan;
+    actor: Actor;
+    now: Date;
+    reprocessOf?: LoadRow;
+  }): { row: LoadRow; events: JournalEvent[] } {
+    const { day, batch, canner, plan, actor, now, reprocessOf } = args;
+    const load: LoadRow = {
+      id: randomUUID(),
+      dayId: day.id,
+      batchId: batch.id,
+      cannerId: canner.id,
+      cannerName: canner.name,
+      method: canner.method,
+      jars: args.jars,
+      number: this.days.nextLoadNumber(day.id),
+      plan,
+      liftedAt: null,
+      reprocessOf: reprocessOf?.id ?? null,
+      bandsOffAt: null,
+      bandsOffBy: null,
+      bandsOffOverride: null,
+      createdAt: now,
+    };
+    this.days.insertLoad(load);
+    const created = this.record(day.id, actor, now, 'load.created', {
+      load: toLoadView(load),
+      ...(reprocessOf ? { reprocessOf: { loadId: reprocessOf.id, number: reprocessOf.number } } : {}),
     });
-    this.timers.publish(events);
-    return toLoadView(row);
+    const label = reprocessOf
+      ? `Load ${load.number}: ${batch.recipe.name} (again, from load ${reprocessOf.number})`
+      : `Load ${load.number}: ${batch.recipe.name}`;
+    // The load's process timer takes its tested minutes from the plan, never from a device.
+    const processTimer = this.timers.createInTransaction(
+      day.id,
+      {
+        kind: load.method === 'pressure' ? 'pressure-process' : 'process',
+        label: label.slice(0, 80),
+        testedMs: plan.minutes * 60_000,
+        loadId: load.id,
+      },
+      actor,
+      now.getTime(),
+    );
+    return { row: load, events: [created, ...processTimer.events] };
+  }
+
+  /**
+   * Opens a closed day again, inside the caller's transaction, with a `day.reopened` entry saying why: jars that
+   * go back into a canner need their live timer, and a closed day refuses live commands.
+   */
+  reopenInTransaction(day: DayRow, actor: Actor, now: Date, why: Record<string, unknown>): JournalEvent[] {
+    if (!this.days.reopenDay(day.id)) return [];
+    return [this.record(day.id, actor, now, 'day.reopened', { closedAt: day.closedAt?.toISOString() ?? null, ...why })];
   }
 
   requireDay(kitchenId: string, dayId: string): DayRow {
@@ -245,7 +253,8 @@ export class DaysService {
     return day;
   }
 
-  private record(dayId: string, actor: Actor, now: Date, type: string, payload: Record<string, unknown>): JournalEvent {
+  /** One journal entry of a day by a person; call inside the transaction of the change it records. */
+  record(dayId: string, actor: Actor, now: Date, type: string, payload: Record<string, unknown>): JournalEvent {
     return this.journal.append({
       dayId,
       at: now.getTime(),

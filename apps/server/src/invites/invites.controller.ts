@@ -1,7 +1,15 @@
-import { createInviteSchema, idSchema, inviteCodeSchema, type InvitePreview, type InviteView } from '@jarday/contracts';
+import {
+  type CreatedInviteView,
+  createInviteSchema,
+  idSchema,
+  inviteCodeSchema,
+  type InvitePreview,
+  type InviteView,
+} from '@jarday/contracts';
 import type { KitchenView } from '@jarday/contracts';
-import { Body, Controller, Delete, Get, HttpCode, Param, Post } from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, Param, Post, Req } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import type { Request } from 'express';
 import type { z } from 'zod';
 import { type AuthUser, CurrentUser } from '../auth/auth.decorators.js';
 import { ApiZodBody } from '../common/openapi.js';
@@ -27,8 +35,13 @@ export class InvitesController {
     @Param('kitchenId') kitchenId: string,
     @CurrentUser() user: AuthUser,
     @Body({ schema: createInviteSchema }) body: z.output<typeof createInviteSchema>,
-  ): InviteView {
-    return this.invites.create(kitchenId, user.id, body);
+    @Req() req: Request,
+  ): CreatedInviteView {
+    return this.invites.create(kitchenId, user.id, body, {
+      origin: req.get('origin'),
+      protocol: req.protocol,
+      host: req.get('host'),
+    });
   }
 
   @Delete('kitchens/:kitchenId/invites/:inviteId')

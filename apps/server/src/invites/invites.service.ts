@@ -1,8 +1,18 @@
 import { randomInt, randomUUID } from 'node:crypto';
-import { INVITE_CODE_ALPHABET, type InvitePreview, type InviteView, type KitchenView } from '@jarday/contracts';
+import {
+  type CreatedInviteView,
+  INVITE_CODE_ALPHABET,
+  type InvitePreview,
+  type InviteView,
+  type KitchenView,
+} from '@jarday/contracts';
 import type { Role } from '@jarday/contracts';
 import { Injectable } from '@nestjs/common';
 import { AppError, notFound } from '../common/app-error.js';
+import { type AppConfig, InjectConfig } from '../config/app-config.js';
+import { linkBase, type RequestOrigin } from '../mail/links.js';
+import { inviteMail } from '../mail/mail-templates.js';
+import { MailService } from '../mail/mail.service.js';
 import { KitchensRepository } from '../kitchens/kitchens.repository.js';
 import { KitchensService } from '../kitchens/kitchens.service.js';
 import { type InviteRow, InvitesRepository } from './invites.repository.js';
@@ -29,13 +39,39 @@ export class InvitesService {
     private readonly invites: InvitesRepository,
     private readonly kitchensRepo: KitchensRepository,
     private readonly kitchens: KitchensService,
+    private readonly mail: MailService,
+    @InjectConfig() private readonly config: AppConfig,
   ) {}
 
+  /** A new invite; with an e-mail address, its link is mailed there after the answer (a failed send is logged). */
   create(
     kitchenId: string,
     createdBy: string,
-    input: { role: Exclude<Role, 'lead'>; expiresInDays: number },
+    input: { role: Exclude<Role, 'lead'>; expiresInDays: number; email?: string | undefined },
+    origin?: RequestOrigin,
     now = new Date(),
+  ): CreatedInviteView {
+    const invite = this.insertNew(kitchenId, createdBy, input, now);
+    if (!input.email || !this.mail.enabled) return { ...invite, emailedTo: null };
+    this.mail.sendLater(
+      inviteMail({
+        to: input.email,
+        kitchenName: this.kitchensRepo.findKitchenName(kitchenId) ?? 'a kitchen',
+        role: invite.role,
+        invitedBy: invite.createdByName,
+        link: `${linkBase(this.config, origin)}/join/${invite.code.replace(/-/g, '')}`,
+        code: invite.code,
+        expiresAt: new Date(invite.expiresAt),
+      }),
+    );
+    return { ...invite, emailedTo: input.email };
+  }
+
+  private insertNew(
+    kitchenId: string,
+    createdBy: string,
+    input: { role: Exclude<Role, 'lead'>; expiresInDays: number },
+    now: Date,
   ): InviteView {
     // 31^8 codes: a collision is rare, but the unique index is the judge; try again on one.
     for (let attempt = 0; attempt < 5; attempt++) {
@@ -87,7 +123,13 @@ export class InvitesService {
       if (!invite) throw inviteNotFound();
       if (this.kitchensRepo.findMembership(invite.kitchenId, userId)) return invite.kitchenId;
       if (!this.invites.markRedeemed(invite.id, userId, now)) throw inviteNotFound();
-      this.kitchensRepo.insertMembership({ kitchenId: invite.kitchenId, userId, role: invite.role, reminders: true, joinedAt: now });
+      this.kitchensRepo.insertMembership({
+        kitchenId: invite.kitchenId,
+        userId,
+        role: invite.role,
+        reminders: true,
+        joinedAt: now,
+      });
       return invite.kitchenId;
     });
     return this.kitchens.get(kitchenId, userId);

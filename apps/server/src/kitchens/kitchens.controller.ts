@@ -3,10 +3,13 @@ import {
   idSchema,
   type KitchenView,
   type MemberView,
+  type MyMembershipView,
   updateKitchenSchema,
   type UpdateKitchenInput,
   updateMemberSchema,
   type UpdateMemberInput,
+  updateMyMembershipSchema,
+  type UpdateMyMembershipInput,
 } from '@jarday/contracts';
 import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
@@ -58,6 +61,23 @@ export class KitchensController {
   @AnyMember()
   members(@Param('kitchenId') kitchenId: string): MemberView[] {
     return this.kitchens.members(kitchenId);
+  }
+
+  /** Declared before `members/:userId`, so "me" is never read as an id. */
+  @Get(':kitchenId/members/me')
+  @AnyMember()
+  me(@CurrentMembership() member: MembershipRow): MyMembershipView {
+    return this.kitchens.myMembership(member);
+  }
+
+  @Patch(':kitchenId/members/me')
+  @AnyMember()
+  @ApiZodBody(updateMyMembershipSchema)
+  updateMe(
+    @CurrentMembership() member: MembershipRow,
+    @Body({ schema: updateMyMembershipSchema }) body: UpdateMyMembershipInput,
+  ): MyMembershipView {
+    return this.kitchens.updateMyMembership(member, body);
   }
 
   @Patch(':kitchenId/members/:userId')

@@ -85,6 +85,14 @@ export class KitchensRepository {
       .run();
   }
 
+  setReminders(kitchenId: string, userId: string, reminders: boolean): void {
+    this.db
+      .update(memberships)
+      .set({ reminders })
+      .where(and(eq(memberships.kitchenId, kitchenId), eq(memberships.userId, userId)))
+      .run();
+  }
+
   deleteMembership(kitchenId: string, userId: string): void {
     this.db
       .delete(memberships)

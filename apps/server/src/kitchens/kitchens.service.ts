@@ -1,5 +1,13 @@
 import { randomUUID } from 'node:crypto';
-import type { CreateKitchenInput, KitchenView, MemberView, Role, UpdateKitchenInput } from '@jarday/contracts';
+import type {
+  CreateKitchenInput,
+  KitchenView,
+  MemberView,
+  MyMembershipView,
+  Role,
+  UpdateKitchenInput,
+  UpdateMyMembershipInput,
+} from '@jarday/contracts';
 import type { Altitude, UnitSystem } from '@jarday/rules';
 import { Injectable } from '@nestjs/common';
 import { AppError, forbidden, notFound } from '../common/app-error.js';
@@ -77,6 +85,18 @@ export class KitchensService {
     const member = this.members(kitchenId).find((m) => m.userId === targetUserId);
     if (!member) throw notFound('Member');
     return member;
+  }
+
+  myMembership(m: MembershipRow): MyMembershipView {
+    return { kitchenId: m.kitchenId, userId: m.userId, role: m.role, reminders: m.reminders };
+  }
+
+  /** Each member decides for themself whether reminders about the kitchen's loads come by e-mail. */
+  updateMyMembership(m: MembershipRow, input: UpdateMyMembershipInput): MyMembershipView {
+    this.repo.setReminders(m.kitchenId, m.userId, input.reminders);
+    const fresh = this.repo.findMembership(m.kitchenId, m.userId);
+    if (!fresh) throw notFound('Member');
+    return this.myMembership(fresh);
   }
 
   /** A lead removes anyone; anyone may leave. The last lead can do neither to themself. */

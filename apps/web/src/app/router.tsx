@@ -60,6 +60,9 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
           ],
         },
         { path: 'join/:code', lazy: page(() => import('./routes/join')) },
+        // What a jar label's QR code opens: public, a member sees more.
+        { path: 'r/:ref', lazy: page(() => import('./routes/jar-record')) },
+        { path: 'dev/mail', lazy: page(() => import('./routes/dev-mail')) },
         {
           element: <RequireAuth />,
           children: [
@@ -82,10 +85,16 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             },
             // Canning days: the plan, and the live board and pocket view, each its own small chunk.
             { path: 'kitchens/:kitchenId/days', lazy: page(() => import('./routes/days'), true) },
+            { path: 'kitchens/:kitchenId/plan', lazy: page(() => import('./routes/planner'), true) },
             { path: 'kitchens/:kitchenId/days/new', lazy: page(() => import('./routes/day-new'), true) },
             { path: 'kitchens/:kitchenId/days/:dayId', lazy: page(() => import('./routes/day'), true) },
             { path: 'kitchens/:kitchenId/days/:dayId/board', lazy: page(() => import('./routes/board'), true) },
             { path: 'kitchens/:kitchenId/days/:dayId/pocket', lazy: page(() => import('./routes/pocket'), true) },
+            { path: 'kitchens/:kitchenId/days/:dayId/journal', lazy: page(() => import('./routes/journal'), true) },
+            // After the canner: the cooling shelf, the pantry and a lot's page.
+            { path: 'kitchens/:kitchenId/cooling', lazy: page(() => import('./routes/cooling'), true) },
+            { path: 'kitchens/:kitchenId/pantry', lazy: page(() => import('./routes/pantry'), true) },
+            { path: 'kitchens/:kitchenId/pantry/:lotId', lazy: page(() => import('./routes/lot'), true) },
           ],
         },
         { path: '*', lazy: page(() => import('./routes/not-found')) },

@@ -12,7 +12,14 @@ export const paths = {
   newRecipe: (kitchenId: string) => `/kitchens/${kitchenId}/recipes/new`,
   editRecipe: (kitchenId: string, recipeId: string) => `/kitchens/${kitchenId}/recipes/${recipeId}/edit`,
   starter: (kitchenId: string, starterId: string) => `/kitchens/${kitchenId}/recipes/starters/${starterId}`,
+  planner: (kitchenId: string) => `/kitchens/${kitchenId}/plan`,
   join: (code: string) => `/join/${code.replace(/-/g, '')}`,
+  jarRecord: (ref: string) => `/r/${ref}`,
+  devMail: () => '/dev/mail',
+  cooling: (kitchenId: string, dayId?: string) => `/kitchens/${kitchenId}/cooling${dayId ? `?day=${dayId}` : ''}`,
+  pantry: (kitchenId: string) => `/kitchens/${kitchenId}/pantry`,
+  lot: (kitchenId: string, lotId: string) => `/kitchens/${kitchenId}/pantry/${lotId}`,
+  journal: (kitchenId: string, dayId: string) => `/kitchens/${kitchenId}/days/${dayId}/journal`,
 };
 
 function withNext(path: string, next?: string): string {

@@ -137,6 +137,22 @@ function fallbackBody(status: number): ApiErrorBody {
   };
 }
 
+/**
+ * Fetches a file (a PDF, a photo) with the same bearer token and one renewal on a 401 as {@link apiRequest}.
+ * Resolves to the bytes; rejects with an {@link ApiError} carrying the server's message when it refuses.
+ */
+export async function apiBlob(path: string, options: Omit<RequestOptions, 'method' | 'body'> = {}): Promise<Blob> {
+  const sentWith = binding.getAccessToken();
+  let response = await send(path, options, sentWith);
+  if (response.status === 401 && options.retryOnUnauthorized !== false) {
+    const current = binding.getAccessToken();
+    const token = current && current !== sentWith ? current : await renewOnce();
+    if (token) response = await send(path, options, token);
+  }
+  if (response.ok) return response.blob();
+  return parse<never>(response);
+}
+
 /** Shorthands that read like the REST table. */
 export const api = {
   get: <T>(path: string, options?: Omit<RequestOptions, 'method' | 'body'>) => apiRequest<T>(path, options),

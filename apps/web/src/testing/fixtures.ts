@@ -50,6 +50,8 @@ export const canner = (over: Partial<CannerView> = {}): CannerView => ({
   method: 'boiling-water',
   gauge: null,
   capacity: { quart: 7, pint: 9 },
+  waterLitres: null,
+  burnerWatts: null,
   createdAt: '2025-08-02T09:30:00.000Z',
   ...over,
 });

@@ -2,6 +2,7 @@ import type { DayView, KitchenView } from '@jarday/contracts';
 import { useQuery } from '@tanstack/react-query';
 import { PageHeader } from '../../components/ui/page-header';
 import { paths } from '../../config/paths';
+import { AttachmentsPanel } from '../../features/attachments';
 import { cannersQueryOptions } from '../../features/canners/api/get-canners';
 import { DayPlan } from '../../features/day/components/day-plan';
 import { dayPaths } from '../../features/day/utils/day-paths';
@@ -30,6 +31,7 @@ function Plan({ kitchen, day }: { kitchen: KitchenView; day: DayView }) {
         canners={canners.data}
         links={{ recipes: paths.recipes(kitchen.id), settings: paths.settings(kitchen.id) }}
       />
+      <AttachmentsPanel kitchenId={kitchen.id} role={kitchen.role} subject="day" subjectId={day.id} />
     </>
   );
 }

@@ -1,5 +1,6 @@
 import EventNote from '@mui/icons-material/EventNote';
 import Groups from '@mui/icons-material/Groups';
+import Kitchen from '@mui/icons-material/Kitchen';
 import MenuBook from '@mui/icons-material/MenuBook';
 import Tune from '@mui/icons-material/Tune';
 import type { KitchenView } from '@jarday/contracts';
@@ -15,6 +16,8 @@ import { Link as RouterLink, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '../../components/ui/page-header';
 import { paths } from '../../config/paths';
 import { dayPaths } from '../../features/day/utils/day-paths';
+import { YesterdayButton } from '../../features/journal/components/yesterday-button';
+import { yesterdayQueryOptions } from '../../features/journal/api/journal-api';
 import { kitchenQueryOptions } from '../../features/kitchens/api/get-kitchen';
 import { CanningCautions } from '../../features/kitchens/components/canning-cautions';
 import { KitchenSummary } from '../../features/kitchens/components/kitchen-summary';
@@ -24,7 +27,12 @@ import { ensureQuietly, WithKitchen } from './with-kitchen';
 export const clientLoader =
   (queryClient: QueryClient) =>
   ({ params }: LoaderFunctionArgs) =>
-    ensureQuietly(queryClient.ensureQueryData(kitchenQueryOptions(params.kitchenId ?? '')));
+    ensureQuietly(
+      Promise.all([
+        queryClient.ensureQueryData(kitchenQueryOptions(params.kitchenId ?? '')),
+        queryClient.ensureQueryData(yesterdayQueryOptions(params.kitchenId ?? '')),
+      ]),
+    );
 
 function Tile({ to, icon, title, text }: { to: string; icon: ReactNode; title: string; text: string }) {
   return (
@@ -58,6 +66,7 @@ function KitchenHome({ kitchen }: { kitchen: KitchenView }) {
         back={{ to: paths.kitchens(), label: 'My kitchens' }}
       />
       <Stack spacing={4}>
+        <YesterdayButton kitchenId={kitchen.id} href={(dayId) => paths.journal(kitchen.id, dayId)} />
         <Grid container spacing={2} component="nav" aria-label="Kitchen pages">
           <Grid size={{ xs: 12, sm: 6 }}>
             <Tile
@@ -93,6 +102,14 @@ function KitchenHome({ kitchen }: { kitchen: KitchenView }) {
               icon={<Tune fontSize="inherit" />}
               title="Settings & canners"
               text={lead ? 'Altitude, units and the canners you own.' : 'Altitude, units and canners.'}
+            />
+          </Grid>
+          <Grid size={{ xs: 12, sm: 6 }}>
+            <Tile
+              to={paths.cooling(kitchen.id)}
+              icon={<Kitchen fontSize="inherit" />}
+              title="Cooling shelf & pantry"
+              text="Bands off, seal checks, then the jars: lots, gifts and labels."
             />
           </Grid>
         </Grid>

@@ -10,6 +10,7 @@ import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { PageHeader } from '../../components/ui/page-header';
 import { Loading, QueryError } from '../../components/ui/query-state';
 import { paths } from '../../config/paths';
+import { AttachmentsPanel } from '../../features/attachments';
 import { cannersQueryOptions, useCanners } from '../../features/canners/api/get-canners';
 import { kitchenQueryOptions } from '../../features/kitchens/api/get-kitchen';
 import { useDeleteRecipe } from '../../features/recipes/api/delete-recipe';
@@ -98,6 +99,13 @@ function RecipePage({ kitchen }: { kitchen: KitchenView }) {
         <RecipeNoticeBanner notice={notice} onClose={() => void navigate('.', { replace: true, state: null })} />
       ) : null}
       <RecipeReadView kitchen={kitchen} recipe={recipe.data} canners={canners.data ?? []} plan={plan} />
+      <AttachmentsPanel
+        kitchenId={kitchen.id}
+        role={kitchen.role}
+        subject="recipe"
+        subjectId={recipe.data.id}
+        title="Photos and recipe cards"
+      />
       <ConfirmDialog
         open={confirming}
         title={`Delete ${recipe.data.name}?`}

@@ -34,6 +34,8 @@ describe('CannerForm', () => {
       method: 'boiling-water',
       gauge: null,
       capacity: { quart: 7, pint: 9 },
+      waterLitres: null,
+      burnerWatts: null,
     });
   });
 
@@ -62,6 +64,8 @@ describe('CannerForm', () => {
       method: 'pressure',
       gauge: 'dial',
       capacity: { quart: 7 },
+      waterLitres: null,
+      burnerWatts: null,
     });
   });
 
@@ -118,6 +122,37 @@ describe('CannerForm', () => {
       method: 'pressure',
       gauge: 'weighted',
       capacity: { pint: 9, quart: 7 },
+      waterLitres: null,
+      burnerWatts: null,
+    });
+  });
+
+  it('sends water and burner figures for the planner, and checks their ranges', async () => {
+    const existing = canner({ waterLitres: 20, burnerWatts: 3000 });
+    const stub = stubFetch({ [`PUT ${cannersPath}/${existing.id}`]: { status: 200, body: existing } });
+    const { user, onSaved } = setup(existing);
+
+    const water = screen.getByLabelText<HTMLInputElement>('Water in the canner (litres)');
+    const burner = screen.getByLabelText<HTMLInputElement>('Burner power (watts)');
+    expect([water.value, burner.value]).toEqual(['20', '3000']);
+    expect(describedText(water)).toContain('1 inch over the jars');
+    await user.clear(water);
+    await user.type(water, '0.5');
+    await user.clear(burner);
+    await user.type(burner, '99000');
+    await user.click(screen.getByRole('button', { name: 'Save canner' }));
+    expectFieldError(water, 'At least 1 L');
+    expectFieldError(burner, 'At most 10,000 W');
+    expect(stub.requests).toHaveLength(0);
+
+    await user.clear(water);
+    await user.type(water, '18.5');
+    await user.clear(burner);
+    await user.click(screen.getByRole('button', { name: 'Save canner' }));
+    await waitFor(() => expect(onSaved).toHaveBeenCalled());
+    expect(stub.to(`PUT ${cannersPath}/${existing.id}`)[0]?.body).toMatchObject({
+      waterLitres: 18.5,
+      burnerWatts: null,
     });
   });
 });

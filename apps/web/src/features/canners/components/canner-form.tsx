@@ -12,6 +12,7 @@ import { useUpdateCanner } from '../api/update-canner';
 import { GAUGE_LABELS, METHOD_LABELS } from '../utils/canner-labels';
 import { CapacityFields, type CapacityText } from './capacity-fields';
 import { DialGaugeCaution } from './dial-gauge-caution';
+import { HeatingFields } from './heating-fields';
 
 interface CannerFormProps {
   kitchenId: string;
@@ -26,6 +27,8 @@ interface Values {
   method: CanningMethod;
   gauge: GaugeType | '';
   capacity: CapacityText;
+  waterLitres: string;
+  burnerWatts: string;
 }
 
 const initialValues = (canner?: CannerView): Values => ({
@@ -35,6 +38,8 @@ const initialValues = (canner?: CannerView): Values => ({
   capacity: Object.fromEntries(
     JAR_SIZES.map((size) => [size, canner?.capacity[size] === undefined ? '' : String(canner.capacity[size])]),
   ) as CapacityText,
+  waterLitres: canner?.waterLitres == null ? '' : String(canner.waterLitres),
+  burnerWatts: canner?.burnerWatts == null ? '' : String(canner.burnerWatts),
 });
 
 /** A boiling-water canner has no gauge, so none is sent; empty jar sizes are left out of the capacity. */
@@ -48,6 +53,9 @@ const toInput = (v: Values) => ({
       numberOrUndefined(v.capacity[size]),
     ]),
   ),
+  // Left empty, they are null: the planner then uses the canner's logged days or the published come-up.
+  waterLitres: numberOrUndefined(v.waterLitres) ?? null,
+  burnerWatts: numberOrUndefined(v.burnerWatts) ?? null,
 });
 
 /** Adds or edits a canner: name, method, gauge (pressure only) and how many jars of each size fit. */
@@ -73,7 +81,7 @@ export function CannerForm({ kitchenId, canner, onSaved, onCancel }: CannerFormP
       return;
     }
     const onError = (error: unknown) => {
-      const split = splitServerError(error, ['name', 'method', 'gauge', 'capacity']);
+      const split = splitServerError(error, ['name', 'method', 'gauge', 'capacity', 'waterLitres', 'burnerWatts']);
       setErrors(split.fieldErrors);
       setGeneral(split.general);
     };
@@ -120,6 +128,12 @@ export function CannerForm({ kitchenId, canner, onSaved, onCancel }: CannerFormP
         value={values.capacity}
         errors={errors}
         onChange={(size, text) => change({ capacity: { ...values.capacity, [size]: text } })}
+      />
+      <HeatingFields
+        waterLitres={values.waterLitres}
+        burnerWatts={values.burnerWatts}
+        errors={errors}
+        onChange={(patch) => change(patch)}
       />
       <Stack direction="row" spacing={1.5} sx={{ justifyContent: 'flex-end' }}>
         {onCancel ? <Button onClick={onCancel}>Cancel</Button> : null}

@@ -47,6 +47,12 @@ export function CannerList({ kitchenId, canManage }: { kitchenId: string; canMan
                   <Typography variant="body2" sx={{ color: 'text.secondary' }}>
                     Per load: {formatCapacity(canner.capacity)}
                   </Typography>
+                  {canner.waterLitres !== null && canner.burnerWatts !== null ? (
+                    <Typography variant="body2" sx={{ color: 'text.secondary' }}>
+                      Heating: {canner.waterLitres.toLocaleString()} L on a {canner.burnerWatts.toLocaleString()} W
+                      burner
+                    </Typography>
+                  ) : null}
                 </Stack>
                 {canManage ? (
                   <Stack direction="row" spacing={1} sx={{ alignItems: 'center' }}>

@@ -3,7 +3,9 @@ import type { BatchView, LoadView, Timer } from '@jarday/contracts';
 import { CAUTIONS } from '@jarday/rules';
 import { formatDuration, MINUTE_MS } from '@jarday/live';
 import Box from '@mui/material/Box';
+import Link from '@mui/material/Link';
 import Typography from '@mui/material/Typography';
+import { Link as RouterLink } from 'react-router-dom';
 import { useTicking } from '../hooks/use-ticking';
 import { useLiveStore } from '../stores/live-store';
 import { clockTime, loadTitle } from '../utils/labels';
@@ -25,13 +27,15 @@ interface CoolingSummaryProps {
   loads: LoadView[];
   batches: BatchView[];
   timers: Timer[];
+  /** The full Cooling shelf page (bands off, seal checks), opened from the board. */
+  shelfHref?: string;
 }
 
 /**
  * The cooling shelf in short: each lifted load, when it came out, and when its bands may come off (12 hours at the
  * earliest, 24 recommended: USDA Complete Guide, Guide 1).
  */
-export function CoolingSummary({ loads, batches, timers }: CoolingSummaryProps) {
+export function CoolingSummary({ loads, batches, timers, shelfHref }: CoolingSummaryProps) {
   const offset = useLiveStore((s) => s.clockOffsetMs);
   const cooling = loads
     .map((load) => ({ load, timer: timersOfLoad(load.id, timers).cooling }))
@@ -64,6 +68,11 @@ export function CoolingSummary({ loads, batches, timers }: CoolingSummaryProps) 
       <Typography sx={{ fontSize: '1rem', color: 'text.secondary' }}>
         Leave jars undisturbed 12 to 24 hours; do not retighten the bands. {CAUTIONS['suspect-jars'].title}.
       </Typography>
+      {shelfHref ? (
+        <Link component={RouterLink} to={shelfHref} sx={{ fontSize: '1.15rem' }}>
+          Open the cooling shelf: bands and seal checks
+        </Link>
+      ) : null}
     </StationCard>
   );
 }

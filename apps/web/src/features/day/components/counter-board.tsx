@@ -11,6 +11,7 @@ import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { lazy, Profiler, Suspense, useState } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
+import { paths } from '../../../config/paths';
 import type { LiveAuth } from '../../../lib/socket';
 import { useAlarmAlert } from '../hooks/use-alarm-alert';
 import { useBoardScheme } from '../hooks/use-board-scheme';
@@ -184,7 +185,12 @@ export function CounterBoard({ kitchen, day, recipes, auth, links }: LiveDayProp
                 testId="station-jars"
                 {...common}
               />
-              <CoolingSummary loads={day.loads} batches={day.batches} timers={timers} />
+              <CoolingSummary
+                loads={day.loads}
+                batches={day.batches}
+                timers={timers}
+                shelfHref={paths.cooling(kitchen.id, day.id)}
+              />
             </Stack>
           </Box>
           <Typography sx={{ color: 'text.secondary', fontSize: '1rem' }}>

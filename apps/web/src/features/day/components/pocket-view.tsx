@@ -2,6 +2,7 @@ import type { BatchView, LoadView, Timer } from '@jarday/contracts';
 import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
+import { paths } from '../../../config/paths';
 import { useAlarmAlert } from '../hooks/use-alarm-alert';
 import { useBoardScheme } from '../hooks/use-board-scheme';
 import { useConfirmStep, type ConfirmStep } from '../hooks/use-confirm-step';
@@ -187,7 +188,12 @@ export function PocketView({ kitchen, day, auth, links }: LiveDayProps) {
             <PresetButtons title="Start a blanch dip" presets={prepPresets()} run={run} canCommand />
           </Paper>
         ) : null}
-        <CoolingSummary loads={day.loads} batches={day.batches} timers={timers} />
+        <CoolingSummary
+          loads={day.loads}
+          batches={day.batches}
+          timers={timers}
+          shelfHref={paths.cooling(kitchen.id, day.id)}
+        />
       </Stack>
       <AlarmOverlay alarms={alarms} run={run} canCommand={canCommand} compact />
     </LiveScreen>

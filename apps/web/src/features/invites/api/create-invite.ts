@@ -1,14 +1,14 @@
-import type { CreateInviteInput, InviteView } from '@jarday/contracts';
+import type { CreatedInviteView, CreateInviteInput } from '@jarday/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { inviteKeys } from './invite-keys';
 
 /** POST /api/kitchens/:kitchenId/invites (lead only). */
-export function createInvite(kitchenId: string, input: CreateInviteInput): Promise<InviteView> {
-  return api.post<InviteView>(`/kitchens/${encodeURIComponent(kitchenId)}/invites`, input);
+export function createInvite(kitchenId: string, input: CreateInviteInput): Promise<CreatedInviteView> {
+  return api.post<CreatedInviteView>(`/kitchens/${encodeURIComponent(kitchenId)}/invites`, input);
 }
 
-export function useCreateInvite(kitchenId: string, options: { onSuccess?: (invite: InviteView) => void } = {}) {
+export function useCreateInvite(kitchenId: string, options: { onSuccess?: (invite: CreatedInviteView) => void } = {}) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: CreateInviteInput) => createInvite(kitchenId, input),

@@ -45,4 +45,35 @@ describe('CreateInviteForm', () => {
     await waitFor(() => expect(screen.getByRole('alert').textContent).toContain('Only a lead can invite people.'));
     expect(screen.queryByTestId('invite-code')).toBeNull();
   });
+
+  it('sends the e-mail address with the invite and says whom the link went to', async () => {
+    const created = { ...invite({ code: 'K7QM-3RTX' }), emailedTo: 'sam@example.test' };
+    const stub = stubFetch({
+      [`POST ${invitesPath}`]: { status: 201, body: created },
+      [`GET ${invitesPath}`]: { status: 200, body: [created] },
+    });
+    const { user } = renderWithProviders(<CreateInviteForm kitchenId={orchardKitchen.id} />);
+
+    await user.type(screen.getByLabelText('E-mail the link to (optional)'), 'Sam@Example.test');
+    await user.click(screen.getByRole('button', { name: 'Create invite' }));
+
+    expect((await screen.findByTestId('invite-emailed')).textContent).toContain('on its way to sam@example.test');
+    expect(stub.to(`POST ${invitesPath}`)[0]?.body).toEqual({
+      role: 'helper',
+      expiresInDays: 7,
+      email: 'sam@example.test',
+    });
+    expect(screen.getByLabelText<HTMLInputElement>('E-mail the link to (optional)').value).toBe('');
+  });
+
+  it('refuses a bad address at the field without asking the server', async () => {
+    const stub = stubFetch({});
+    const { user } = renderWithProviders(<CreateInviteForm kitchenId={orchardKitchen.id} />);
+
+    await user.type(screen.getByLabelText('E-mail the link to (optional)'), 'sam at home');
+    await user.click(screen.getByRole('button', { name: 'Create invite' }));
+
+    expect(await screen.findByText('Enter a valid e-mail address')).toBeTruthy();
+    expect(stub.requests).toHaveLength(0);
+  });
 });

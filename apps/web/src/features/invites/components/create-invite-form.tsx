@@ -1,4 +1,4 @@
-import { createInviteSchema, type InviteView } from '@jarday/contracts';
+import { type CreatedInviteView, createInviteSchema } from '@jarday/contracts';
 import Alert from '@mui/material/Alert';
 import Button from '@mui/material/Button';
 import Stack from '@mui/material/Stack';
@@ -12,27 +12,41 @@ import { InviteCodeCard } from './invite-code-card';
 const INVITABLE = ['helper', 'watcher'] as const;
 const EXPIRY_DAYS = [1, 3, 7, 14, 30] as const;
 
-/** A lead creates an invite for a helper or a watcher; the new code is shown large with its link. */
+/**
+ * A lead creates an invite for a helper or a watcher; the new code is shown large with its link. With an e-mail
+ * address, the server also mails the link there.
+ */
 export function CreateInviteForm({ kitchenId }: { kitchenId: string }) {
   const [role, setRole] = useState<(typeof INVITABLE)[number]>('helper');
   const [days, setDays] = useState('7');
+  const [email, setEmail] = useState('');
   const [errors, setErrors] = useState<FieldErrors>({});
   const [general, setGeneral] = useState<string | null>(null);
-  const [created, setCreated] = useState<InviteView | null>(null);
-  const create = useCreateInvite(kitchenId, { onSuccess: setCreated });
+  const [created, setCreated] = useState<{ invite: CreatedInviteView; askedEmail: boolean } | null>(null);
+  const create = useCreateInvite(kitchenId);
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
     setGeneral(null);
-    const result = validate(createInviteSchema, { role, expiresInDays: Number(days) });
+    const result = validate(createInviteSchema, {
+      role,
+      expiresInDays: Number(days),
+      ...(email.trim() !== '' && { email }),
+    });
     if (!result.ok) {
       setErrors(result.errors);
       return;
     }
     setErrors({});
+    const askedEmail = result.data.email !== undefined;
     create.mutate(result.data, {
+      onSuccess: (invite) => {
+        setCreated({ invite, askedEmail });
+        // A second invite should not go to the same person by accident.
+        setEmail('');
+      },
       onError: (error) => {
-        const split = splitServerError(error, ['role', 'expiresInDays']);
+        const split = splitServerError(error, ['role', 'expiresInDays', 'email']);
         setErrors(split.fieldErrors);
         setGeneral(split.general);
       },
@@ -75,6 +89,16 @@ export function CreateInviteForm({ kitchenId }: { kitchenId: string }) {
             ))}
           </TextField>
         </Stack>
+        <TextField
+          label="E-mail the link to (optional)"
+          type="email"
+          autoComplete="off"
+          inputMode="email"
+          value={email}
+          onChange={(e) => setEmail(e.target.value)}
+          error={Boolean(errors.email)}
+          helperText={errors.email ?? 'Leave it empty to share the code or the link yourself.'}
+        />
         <Button
           type="submit"
           variant="contained"
@@ -85,7 +109,7 @@ export function CreateInviteForm({ kitchenId }: { kitchenId: string }) {
           {create.isPending ? 'Creating…' : 'Create invite'}
         </Button>
       </Stack>
-      {created ? <InviteCodeCard invite={created} /> : null}
+      {created ? <InviteCodeCard invite={created.invite} askedEmail={created.askedEmail} /> : null}
     </Stack>
   );
 }

@@ -1,5 +1,5 @@
 import ContentCopy from '@mui/icons-material/ContentCopy';
-import type { InviteView } from '@jarday/contracts';
+import type { CreatedInviteView } from '@jarday/contracts';
 import Alert from '@mui/material/Alert';
 import Button from '@mui/material/Button';
 import Card from '@mui/material/Card';
@@ -13,8 +13,22 @@ import { inviteLink } from '../utils/invite-link';
 
 type CopyState = 'idle' | 'copied' | 'failed';
 
+/** Whom the link was mailed to, or why it was not. */
+function EmailNote({ invite, askedEmail }: { invite: CreatedInviteView; askedEmail: boolean }) {
+  const to = invite.emailedTo;
+  if (to) {
+    return (
+      <Alert severity="success" data-testid="invite-emailed">
+        The link is on its way to {to}. If it does not arrive, share the code or the link yourself.
+      </Alert>
+    );
+  }
+  if (!askedEmail) return null;
+  return <Alert severity="warning">This server does not send e-mail. Share the code or the link below yourself.</Alert>;
+}
+
 /** A fresh invite: the code large enough to read across a kitchen, and the link with a copy button. */
-export function InviteCodeCard({ invite }: { invite: InviteView }) {
+export function InviteCodeCard({ invite, askedEmail = false }: { invite: CreatedInviteView; askedEmail?: boolean }) {
   const link = inviteLink(invite.code);
   const [copy, setCopy] = useState<CopyState>('idle');
   const codeId = useId();
@@ -43,6 +57,7 @@ export function InviteCodeCard({ invite }: { invite: InviteView }) {
           >
             {invite.code}
           </Typography>
+          <EmailNote invite={invite} askedEmail={askedEmail} />
           <Typography sx={{ color: 'text.secondary' }}>
             Joins as {ROLE_LABELS[invite.role].toLowerCase()} · works until {formatDateTime(invite.expiresAt)}
           </Typography>

@@ -2,4 +2,5 @@
 export const memberKeys = {
   all: ['members'] as const,
   list: (kitchenId: string) => [...memberKeys.all, 'list', kitchenId] as const,
+  me: (kitchenId: string) => [...memberKeys.all, 'me', kitchenId] as const,
 };

@@ -9,6 +9,7 @@ import { useMembers } from '../api/get-members';
 import { useRemoveMember } from '../api/remove-member';
 import { useUpdateMember } from '../api/update-member';
 import { MemberRow } from './member-row';
+import { ReminderSwitch } from './reminder-switch';
 
 interface MemberListProps {
   kitchenId: string;
@@ -60,6 +61,8 @@ export function MemberList({ kitchenId, kitchenName, currentUserId, canManage, o
           </Fragment>
         ))}
       </Stack>
+      <Divider aria-hidden />
+      <ReminderSwitch kitchenId={kitchenId} />
       <ConfirmDialog
         open={pending !== null}
         title={leaving ? `Leave ${kitchenName}?` : `Remove ${pending?.name ?? ''}?`}
