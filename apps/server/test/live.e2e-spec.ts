@@ -207,6 +207,31 @@ describe('the live day over socket.io (e2e: real server on a port, real clients,
       .send({ recipeId: 'x', jarSize: 'pint', pack: 'hot', jars: 1 })
       .expect(409);
   });
+
+  it('an alarm that rings after the day was closed can still be silenced, and nothing else moves', async () => {
+    const { day, tablet, phone } = await joinedPair();
+    const dip = await ok<TimerAnswer>(tablet, 'timer:start', {
+      commandId: randomUUID(),
+      dayId: day.id,
+      timer: { kind: 'blanch', label: 'Last dip', durationMs: 1000, startNow: true },
+    });
+    await request(t.http).post(`/api/kitchens/${crew.kitchen.id}/days/${day.id}/close`).set(crew.lead.auth).expect(200);
+    await waitForEvent(
+      phone,
+      (e) => e.type === 'alarm.raised' && (e.payload as { timerId: string }).timerId === dip.timer.id,
+    );
+    expect(
+      await call(phone, 'timer:command', command(day.id, dip.timer.id, { type: 'add-time', addMs: 60_000 })),
+    ).toMatchObject({
+      error: { code: 'invalid_state' },
+    });
+    const acked = await ok<TimerAnswer>(phone, 'alarm:ack', {
+      commandId: randomUUID(),
+      dayId: day.id,
+      timerId: dip.timer.id,
+    });
+    expect(acked.timer.alarm?.acknowledgedBy).toBe(crew.helper.user.id);
+  });
 });
 
 describe('the step guide over socket.io (e2e)', () => {

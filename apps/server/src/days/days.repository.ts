@@ -9,8 +9,9 @@ export type BatchRow = typeof batches.$inferSelect;
 export type LoadRow = typeof loads.$inferSelect;
 
 const counts = {
-  batchCount: sql<number>`(select count(*) from ${batches} b where b.day_id = ${days.id})`,
-  loadCount: sql<number>`(select count(*) from ${loads} l where l.day_id = ${days.id})`,
+  // Spelled out: Drizzle writes ${days.id} as a bare "id" here, which the subquery would read as its own column.
+  batchCount: sql<number>`(select count(*) from ${batches} b where b.day_id = "days"."id")`,
+  loadCount: sql<number>`(select count(*) from ${loads} l where l.day_id = "days"."id")`,
 };
 
 @Injectable()

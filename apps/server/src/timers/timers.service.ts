@@ -136,7 +136,8 @@ export class TimersService implements OnApplicationBootstrap {
     actor: LiveActor,
   ): Promise<Ack<TimerAnswer>> {
     return this.once('timer:command', dayId, commandId, { timerId, command }, actor, () => {
-      if (this.timers.dayStatus(dayId) !== 'open') return { error: closedDay() };
+      // A cooling rest can ring after the day was closed (bands come off tomorrow): silencing it is always allowed.
+      if (command.type !== 'acknowledge' && this.timers.dayStatus(dayId) !== 'open') return { error: closedDay() };
       const timer = this.timers.find(dayId, timerId);
       if (!timer) return { error: noTimer() };
       const result: TimerResult = applyTimerCommand(timer, command, {

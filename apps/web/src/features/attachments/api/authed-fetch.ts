@@ -13,9 +13,8 @@ const send = (path: string, init: RequestInit) => {
 };
 
 /**
- * fetch() for what the JSON client cannot carry: a multipart upload and the bytes of a stored file. An <img>
- * cannot send the bearer header, so images are fetched here and shown from blob: URLs. On a 401 the shared
- * client renews the session (one renewal for all callers) and the request is sent once more.
+ * fetch() for the one body the JSON client cannot carry, a multipart upload. On a 401 the shared client renews
+ * the session (one renewal for all callers) and the request is sent once more.
  */
 export async function authedFetch(path: string, init: RequestInit = {}): Promise<Response> {
   let response: Response;

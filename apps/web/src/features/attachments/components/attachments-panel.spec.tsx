@@ -1,6 +1,7 @@
 import type { AttachmentView } from '@jarday/contracts';
 import { screen, waitFor, within } from '@testing-library/react';
-import { beforeEach, describe, expect, it, vi } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { bindAuth } from '../../../lib/api-client';
 import { useSessionStore } from '../../auth/stores/session-store';
 import { errorBody, stubFetch } from '../../../testing/fetch-stub';
 import { renderWithProviders } from '../../../testing/render';
@@ -41,7 +42,9 @@ const card = attachment({
 const fileInput = () => document.querySelector<HTMLInputElement>('input[type="file"]')!;
 
 describe('AttachmentsPanel', () => {
+  let unbind: () => void;
   beforeEach(() => {
+    unbind = bindAuth({ getAccessToken: () => 'token-1', renewAccessToken: () => Promise.resolve(null) });
     useSessionStore.getState().setSession({
       user: me,
       accessToken: 'token-1',
@@ -50,6 +53,7 @@ describe('AttachmentsPanel', () => {
     vi.spyOn(URL, 'createObjectURL').mockImplementation(() => 'blob:thumb-a1');
     vi.spyOn(URL, 'revokeObjectURL').mockImplementation(() => undefined);
   });
+  afterEach(() => unbind());
 
   it('shows photos by their thumbnails, fetched with the bearer header, and documents by name', async () => {
     const stub = stubFetch({
@@ -60,8 +64,7 @@ describe('AttachmentsPanel', () => {
 
     const img = await screen.findByRole('img', { name: 'jars.jpg' });
     expect(img.getAttribute('src')).toBe('blob:thumb-a1');
-    const thumbCall = stub.fetchMock.mock.calls.find(([url]) => (url as string).endsWith('/a1/thumb'));
-    expect(new Headers(thumbCall?.[1]?.headers).get('Authorization')).toBe('Bearer token-1');
+    expect(stub.to(`GET ${base}/a1/thumb`)[0]?.headers.Authorization).toBe('Bearer token-1');
     expect(screen.getByRole('button', { name: 'Open document card.pdf' })).toBeTruthy();
     // No thumbnail is asked for a PDF.
     expect(stub.to(`GET ${base}/a2/thumb`)).toHaveLength(0);
@@ -91,6 +94,7 @@ describe('AttachmentsPanel', () => {
     await screen.findByRole('button', { name: 'Open document card.pdf' });
     const post = stub.fetchMock.mock.calls.find(([, init]) => init?.method === 'POST');
     const form = post?.[1]?.body as FormData;
+    expect(new Headers(post?.[1]?.headers).get('Authorization')).toBe('Bearer token-1');
     expect(form.get('subject')).toBe('day');
     expect(form.get('subjectId')).toBe(DAY);
     expect((form.get('file') as File).name).toBe('card.pdf');
