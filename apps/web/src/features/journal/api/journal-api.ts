@@ -1,6 +1,7 @@
 import type { DayReviewView, JournalQuery, JournalView, PastDayView, YesterdayView } from '@jarday/contracts';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api, apiBlob } from '../../../lib/api-client';
+import { saveFile } from '../../../lib/save-file';
 
 const kitchenPath = (kitchenId: string) => `/kitchens/${encodeURIComponent(kitchenId)}`;
 const dayPath = (kitchenId: string, dayId: string) => `${kitchenPath(kitchenId)}/days/${encodeURIComponent(dayId)}`;
@@ -66,14 +67,5 @@ export async function downloadExport(
   filter: JournalQuery = {},
 ): Promise<void> {
   const path = kind === 'csv' ? `/journal.csv${filterSearch(filter)}` : '/record.pdf';
-  const blob = await apiBlob(`${dayPath(kitchenId, dayId)}${path}`);
-  const url = URL.createObjectURL(blob);
-  const link = document.createElement('a');
-  link.href = url;
-  link.download = fileName;
-  document.body.append(link);
-  link.click();
-  link.remove();
-  // Give the browser a moment to start the download before the address is released.
-  setTimeout(() => URL.revokeObjectURL(url), 10_000);
+  saveFile(await apiBlob(`${dayPath(kitchenId, dayId)}${path}`), fileName);
 }
