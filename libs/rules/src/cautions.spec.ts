@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { CAUTION_IDS, CAUTION_LIST, CAUTIONS, cautionsFor } from './cautions.js';
+import { CAUTION_IDS, CAUTION_LIST, CAUTIONS, cautionsFor, planCautions } from './cautions.js';
 
 describe('cautions', () => {
   it('has one entry per id, in order, each with a title and text', () => {
@@ -64,5 +64,15 @@ describe('cautionsFor', () => {
     expect(cautionsFor({ method: 'pressure', productClass: 'low-acid', gauge: 'weighted' })).not.toContain(
       'dial-gauge-check',
     );
+  });
+});
+
+describe('planCautions', () => {
+  it('puts the salsa caution second for a salsa only (NCHFP: only spices and herbs may change)', () => {
+    const ids = cautionsFor({ method: 'boiling-water', productClass: 'acidified', gauge: null });
+    const salsa = planCautions(ids, { isSalsa: true }).map((c) => c.id);
+    const jam = planCautions(ids, { isSalsa: false }).map((c) => c.id);
+    expect(salsa).toEqual([ids[0], 'salsa-changes', ...ids.slice(1)]);
+    expect(jam).toEqual(ids);
   });
 });

@@ -145,3 +145,13 @@ export function cautionsFor(process: {
   ids.push('no-oven', 'local-guidance');
   return ids;
 }
+
+/**
+ * The cautions to show with a recipe's plan: the process's own, and for a salsa the warning that only spices and
+ * herbs may change (NCHFP), second in line because it is about the recipe itself.
+ */
+export function planCautions(cautionIds: readonly CautionId[], recipe: { isSalsa: boolean }): Caution[] {
+  const ids = [...cautionIds];
+  if (recipe.isSalsa) ids.splice(1, 0, 'salsa-changes');
+  return ids.map((id) => CAUTIONS[id]);
+}

@@ -8,7 +8,7 @@ import {
   type RecipeView,
   rulesOf,
 } from '@jarday/contracts';
-import { CAUTIONS, type CautionId, planProcess } from '@jarday/rules';
+import { planCautions, planProcess } from '@jarday/rules';
 import { Injectable } from '@nestjs/common';
 import { notFound } from '../common/app-error.js';
 import { CannersRepository } from '../canners/canners.repository.js';
@@ -122,8 +122,10 @@ export class RecipesService {
       canner,
     });
     if (!result.ok) return result;
-    const ids: CautionId[] = [...result.plan.cautionIds];
-    if (recipe.category === 'salsa') ids.splice(1, 0, 'salsa-changes');
-    return { ok: true, plan: result.plan, cautions: ids.map((cid) => CAUTIONS[cid]) };
+    return {
+      ok: true,
+      plan: result.plan,
+      cautions: planCautions(result.plan.cautionIds, { isSalsa: recipe.category === 'salsa' }),
+    };
   }
 }

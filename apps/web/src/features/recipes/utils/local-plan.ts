@@ -1,10 +1,9 @@
 import type { PlanAnswer, RecipeCategory } from '@jarday/contracts';
 import {
-  CAUTIONS,
+  planCautions,
   planProcess,
   recipeRulesSchema,
   type Altitude,
-  type CautionId,
   type JarSize,
   type PackStyle,
   type RecipeRulesInput,
@@ -33,9 +32,11 @@ export function planLocally(input: {
     canner: input.canner,
   });
   if (!result.ok) return result;
-  const ids: CautionId[] = [...result.plan.cautionIds];
-  if (input.category === 'salsa') ids.splice(1, 0, 'salsa-changes');
-  return { ok: true, plan: result.plan, cautions: ids.map((id) => CAUTIONS[id]) };
+  return {
+    ok: true,
+    plan: result.plan,
+    cautions: planCautions(result.plan.cautionIds, { isSalsa: input.category === 'salsa' }),
+  };
 }
 
 export type DraftRules = { ok: true; recipe: RecipeRulesInput } | { ok: false; problems: string[] };
